@@ -1,0 +1,26 @@
+// Nuxt configuration: one app, one process (pages, API and websocket on one port).
+export default defineNuxtConfig({
+  compatibilityDate: '2026-11-01',
+  devtools: { enabled: false },
+  telemetry: false,
+  modules: ['@pinia/nuxt', '@nuxtjs/tailwindcss', 'nuxt-auth-utils'],
+  css: ['@fontsource/inter/400.css', '@fontsource/inter/500.css', '@fontsource/inter/600.css', '@fontsource/inter/700.css', '~/assets/css/main.css'],
+  app: {
+    head: {
+      title: 'Portwright',
+      htmlAttrs: { lang: 'en' },
+      meta: [{ name: 'description', content: 'Design and review RF feed networks: hybrids, dividers, beamforming matrices.' }],
+      link: [{ rel: 'icon', type: 'image/svg+xml', href: '/favicon.svg' }],
+    },
+  },
+  typescript: { strict: true },
+  tailwindcss: { cssPath: false, viewer: false },
+  nitro: {
+    experimental: { websocket: true },
+    externals: { inline: [] },
+  },
+  runtimeConfig: {
+    databaseUrl: '',
+    session: { maxAge: 60 * 60 * 24 * 7, cookie: { sameSite: 'lax', httpOnly: true } },
+  },
+})

@@ -1,0 +1,28 @@
+import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize'
+
+/** A review comment on a snapshot; `anchor` says whether it targets the snapshot, a block or a frequency range. */
+export class Comment extends Model<InferAttributes<Comment>, InferCreationAttributes<Comment>> {
+  declare id: CreationOptional<string>
+  declare snapshotId: string
+  declare parentId: string | null
+  declare authorId: string | null
+  declare body: string
+  declare anchor: CreationOptional<Record<string, unknown>>
+  declare resolvedAt: Date | null
+  declare createdAt: CreationOptional<Date>
+  declare updatedAt: CreationOptional<Date>
+
+  static setup(sequelize: Sequelize) {
+    Comment.init({
+      id: { type: DataTypes.UUID, primaryKey: true, defaultValue: DataTypes.UUIDV4 },
+      snapshotId: { type: DataTypes.UUID, allowNull: false },
+      parentId: { type: DataTypes.UUID, allowNull: true },
+      authorId: { type: DataTypes.UUID, allowNull: true },
+      body: { type: DataTypes.TEXT, allowNull: false },
+      anchor: { type: DataTypes.JSONB, allowNull: false, defaultValue: { kind: 'snapshot' } },
+      resolvedAt: { type: DataTypes.DATE, allowNull: true },
+      createdAt: DataTypes.DATE,
+      updatedAt: DataTypes.DATE,
+    }, { sequelize, tableName: 'comments', underscored: true })
+  }
+}

@@ -1,0 +1,44 @@
+import type { NetworkDocument } from '../network/types'
+
+/** Project roles, from most to least powerful. */
+export const projectRoles = ['owner', 'editor', 'reviewer', 'viewer'] as const
+export type ProjectRole = (typeof projectRoles)[number]
+
+/** The signed-in user as the API reports it. */
+export interface UserDto {
+  id: string
+  email: string
+  name: string
+  isAdmin: boolean
+}
+
+export interface ProjectDto {
+  id: string
+  name: string
+  description: string
+  role: ProjectRole
+  createdAt: string
+  updatedAt: string
+}
+
+export interface MemberDto {
+  userId: string
+  email: string
+  name: string
+  role: ProjectRole
+}
+
+export interface NetworkSummaryDto {
+  id: string
+  projectId: string
+  name: string
+  revision: number
+  updatedAt: string
+  updatedBy: string | null
+}
+
+/** A network with its full document; `revision` must be sent back on update. */
+export interface NetworkDto extends NetworkSummaryDto {
+  document: NetworkDocument
+  role: ProjectRole
+}

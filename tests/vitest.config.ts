@@ -1,0 +1,47 @@
+import { fileURLToPath } from 'node:url'
+import { defineConfig } from 'vitest/config'
+
+// Lives under tests/ so the project's top level stays as DEVELOPERS.md describes.
+const root = fileURLToPath(new URL('..', import.meta.url))
+
+export default defineConfig({
+  root,
+  resolve: {
+    alias: {
+      '#shared': fileURLToPath(new URL('../shared', import.meta.url)),
+      '~~': root,
+    },
+  },
+  test: {
+    projects: [
+      {
+        extends: true,
+        test: { name: 'unit', include: ['tests/unit/**/*.test.ts'], environment: 'node' },
+      },
+      {
+        extends: true,
+        test: {
+          name: 'server',
+          include: ['tests/server/**/*.test.ts'],
+          environment: 'node',
+          globalSetup: ['tests/support/global-setup.ts'],
+          fileParallelism: false,
+          testTimeout: 30_000,
+          hookTimeout: 120_000,
+        },
+      },
+      {
+        extends: true,
+        test: {
+          name: 'e2e',
+          include: ['tests/e2e/**/*.test.ts'],
+          environment: 'node',
+          globalSetup: ['tests/support/global-setup.ts'],
+          fileParallelism: false,
+          testTimeout: 90_000,
+          hookTimeout: 120_000,
+        },
+      },
+    ],
+  },
+})
