@@ -6,7 +6,7 @@
  */
 import { defineStore } from 'pinia'
 import { computed, markRaw, ref, shallowRef } from 'vue'
-import type { NetworkDocument } from '~~/shared/network/types'
+import type { NetworkDocument, Sweep } from '~~/shared/network/types'
 import type { BlockKind, ParamValue } from '~~/app/utils/editor/blockCatalog'
 import { GRID } from '~~/app/utils/editor/blockCatalog'
 import {
@@ -176,16 +176,16 @@ export const useEditorStore = defineStore('editor', () => {
   function setReferenceImpedance(value: number) {
     edit((d) => { d.referenceImpedance = value }, { mergeKey: 'referenceImpedance' })
   }
-  function setSweep(patch: Partial<NetworkDocument['sweep']>) {
-    edit((d) => { d.sweep = { ...d.sweep, ...patch } }, { mergeKey: `sweep:${Object.keys(patch).join(',')}` })
+  function setSweep(patch: Partial<Sweep>) {
+    edit((d) => { d.sweep = { ...(d.sweep ?? emptyDocument('').sweep!), ...patch } }, { mergeKey: `sweep:${Object.keys(patch).join(',')}` })
   }
   function setVariable(name: string, expression: ParamValue) {
-    edit((d) => { d.variables = { ...d.variables, [name]: expression } }, { mergeKey: `var:${name}` })
+    edit((d) => { d.variables = { ...(d.variables ?? {}), [name]: expression } }, { mergeKey: `var:${name}` })
   }
   function renameVariable(from: string, to: string): boolean {
-    if (!/^[A-Za-z_]\w*$/.test(to) || (to !== from && to in doc.value.variables)) return false
+    if (!/^[A-Za-z_]\w*$/.test(to) || (to !== from && to in (doc.value.variables ?? {}))) return false
     edit((d) => {
-      d.variables = Object.fromEntries(Object.entries(d.variables).map(([k, v]) => [k === from ? to : k, v]))
+      d.variables = Object.fromEntries(Object.entries(d.variables ?? {}).map(([k, v]) => [k === from ? to : k, v]))
     })
     return true
   }

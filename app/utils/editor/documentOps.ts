@@ -244,7 +244,7 @@ export function renameBlock(doc: NetworkDocument, from: string, to: string): boo
 }
 
 /** Number of wires at each terminal, keyed `BLOCK.N`. */
-export function wireCounts(doc: NetworkDocument): Map<string, number> {
+export function wireCount(doc: NetworkDocument): Map<string, number> {
   const counts = new Map<string, number>()
   for (const [a, b] of doc.wires) {
     counts.set(a, (counts.get(a) ?? 0) + 1)
