@@ -1,0 +1,35 @@
+# Shared first steps of `npm start` and `npm test` on a fresh machine:
+# Node dependencies, PostgreSQL from Debian's packages, and (for tests) Chromium.
+set -euo pipefail
+
+apt_updated=0
+apt_install() {
+  if [ "$(id -u)" != "0" ]; then
+    echo "Portwright needs the Debian package(s) $* — install them (sudo apt-get install -y $*) and run again." >&2
+    exit 1
+  fi
+  if [ "$apt_updated" = 0 ]; then apt-get update -qq; apt_updated=1; fi
+  DEBIAN_FRONTEND=noninteractive apt-get install -y -qq "$@" >/dev/null
+}
+
+ensure_node_modules() {
+  # Reinstall when node_modules is missing or older than the lock file.
+  if [ ! -d node_modules ] || [ package-lock.json -nt node_modules/.package-lock.json ]; then
+    echo "Installing Node dependencies (npm ci)…"
+    npm ci --no-audit --no-fund --loglevel=error
+  fi
+}
+
+ensure_postgres() {
+  if ! ls /usr/lib/postgresql/*/bin/pg_ctl >/dev/null 2>&1; then
+    echo "Installing PostgreSQL from Debian's packages…"
+    apt_install postgresql
+  fi
+}
+
+ensure_chromium() {
+  if [ ! -x /usr/bin/chromium ]; then
+    echo "Installing Chromium from Debian's packages (browser tests)…"
+    apt_install chromium
+  fi
+}

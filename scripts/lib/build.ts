@@ -1,0 +1,28 @@
+import { spawnSync } from 'node:child_process'
+import { existsSync, statSync, readdirSync } from 'node:fs'
+import { join } from 'node:path'
+
+const SOURCES = ['app', 'server', 'shared', 'public', 'nuxt.config.ts', 'tailwind.config.ts', 'package-lock.json']
+
+function newestMtime(path: string): number {
+  if (!existsSync(path)) return 0
+  const stat = statSync(path)
+  if (!stat.isDirectory()) return stat.mtimeMs
+  let newest = stat.mtimeMs
+  for (const entry of readdirSync(path)) newest = Math.max(newest, newestMtime(join(path, entry)))
+  return newest
+}
+
+/** Builds the app when `.output` is missing or older than any source file. */
+export function buildIfStale(root: string, force = false): void {
+  const entry = join(root, '.output', 'server', 'index.mjs')
+  const built = existsSync(entry) ? statSync(entry).mtimeMs : 0
+  const stale = force || SOURCES.some(s => newestMtime(join(root, s)) > built)
+  if (!stale) return
+  console.log('Building the app (nuxt build)…')
+  const result = spawnSync('npx', ['nuxt', 'build'], { cwd: root, stdio: ['ignore', 'pipe', 'inherit'], encoding: 'utf8' })
+  if (result.status !== 0) {
+    process.stdout.write(result.stdout ?? '')
+    throw new Error('nuxt build failed')
+  }
+}

@@ -1,0 +1,32 @@
+import { spawn, type ChildProcess } from 'node:child_process'
+import { join } from 'node:path'
+
+/** Starts the built server and resolves once /api/health answers ok. */
+export async function startServer(root: string, env: Record<string, string>, port: number, host = '127.0.0.1'): Promise<ChildProcess> {
+  const child = spawn(process.execPath, [join(root, '.output', 'server', 'index.mjs')], {
+    cwd: root,
+    env: { ...process.env, ...env, PORT: String(port), HOST: host, NITRO_PORT: String(port), NITRO_HOST: host },
+    stdio: ['ignore', 'inherit', 'inherit'],
+  })
+  const url = `http://${host}:${port}/api/health`
+  for (let i = 0; i < 300; i++) {
+    if (child.exitCode !== null) throw new Error(`The server exited during start-up (code ${child.exitCode}).`)
+    try {
+      const response = await fetch(url)
+      if (response.ok) return child
+    } catch { /* not listening yet */ }
+    await new Promise(r => setTimeout(r, 100))
+  }
+  child.kill('SIGTERM')
+  throw new Error(`The server did not answer ${url} within 30 s.`)
+}
+
+/** Stops a child process, escalating to SIGKILL after a grace period. */
+export async function stopProcess(child: ChildProcess, graceMs = 5000): Promise<void> {
+  if (child.exitCode !== null || child.signalCode !== null) return
+  const exited = new Promise<void>(resolve => child.once('exit', () => resolve()))
+  child.kill('SIGTERM')
+  const timer = setTimeout(() => child.kill('SIGKILL'), graceMs)
+  await exited
+  clearTimeout(timer)
+}

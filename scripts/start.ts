@@ -1,0 +1,59 @@
+import { resolve } from 'node:path'
+import { ensureCluster, startCluster, stopCluster, ensureDatabase, databaseUrl, isReady, type Cluster } from './lib/postgres'
+import { prepareDatabase } from './lib/database-setup'
+import { buildIfStale } from './lib/build'
+import { sessionSecret } from './lib/secret'
+import { startServer, stopProcess } from './lib/server-process'
+
+// Everything the start command keeps lives in the git-ignored .data folder.
+const root = resolve(import.meta.dirname, '..')
+const dataRoot = resolve(root, process.env.PORTWRIGHT_DATA_DIR ?? '.data')
+const port = Number(process.env.PORT ?? 3000)
+const host = process.env.HOST ?? '127.0.0.1'
+const cluster: Cluster = { dataDir: resolve(dataRoot, 'postgres'), port: Number(process.env.PORTWRIGHT_DB_PORT ?? 54329) }
+
+async function main() {
+  const secret = sessionSecret(resolve(dataRoot, 'session-secret'))
+  ensureCluster(cluster)
+  let ownCluster = false
+  if (!isReady(cluster)) {
+    await startCluster(cluster)
+    ownCluster = true
+  }
+  const stopDatabase = () => { if (ownCluster) stopCluster(cluster) }
+  try {
+    await ensureDatabase(cluster, 'portwright')
+    const url = databaseUrl(cluster, 'portwright')
+    const { migrated, seeded } = await prepareDatabase(url, { seed: process.env.PORTWRIGHT_SEED !== '0' })
+    if (migrated.length) console.log(`Applied migrations: ${migrated.join(', ')}`)
+    if (seeded) console.log('Loaded the demo data (Quillmere Microwave Lab).')
+    buildIfStale(root)
+    const server = await startServer(root, { NUXT_DATABASE_URL: url, NUXT_SESSION_PASSWORD: secret }, port, host)
+    console.log(`\nPortwright is running at http://${host === '0.0.0.0' ? '127.0.0.1' : host}:${port}/  (Ctrl-C stops it and its database)\n`)
+    let stopping = false
+    const shutdown = async () => {
+      if (stopping) return
+      stopping = true
+      console.log('Stopping Portwright…')
+      await stopProcess(server)
+      stopDatabase()
+      process.exit(0)
+    }
+    process.on('SIGINT', shutdown)
+    process.on('SIGTERM', shutdown)
+    server.on('exit', (code) => {
+      if (stopping) return
+      console.error(`The app server stopped unexpectedly (code ${code}).`)
+      stopDatabase()
+      process.exit(1)
+    })
+  } catch (error) {
+    stopDatabase()
+    throw error
+  }
+}
+
+main().catch((error) => {
+  console.error(`Portwright could not start: ${error instanceof Error ? error.message : error}`)
+  process.exit(1)
+})

@@ -1,0 +1,77 @@
+import { resolve } from 'node:path'
+import { rmSync, mkdirSync, readFileSync, existsSync } from 'node:fs'
+import { spawnSync } from 'node:child_process'
+import { randomBytes } from 'node:crypto'
+import { ensureCluster, startCluster, stopCluster, ensureDatabase, databaseUrl, type Cluster } from './lib/postgres'
+import { prepareDatabase } from './lib/database-setup'
+import { buildIfStale } from './lib/build'
+import { startServer, stopProcess } from './lib/server-process'
+
+// The test run's own cluster, port and folders: the start command's data is never touched.
+const root = resolve(import.meta.dirname, '..')
+const testRoot = resolve(root, '.data', 'test')
+const cluster: Cluster = { dataDir: resolve(testRoot, 'postgres'), port: Number(process.env.PORTWRIGHT_TEST_DB_PORT ?? 54339), unsafeFast: true }
+const appPort = Number(process.env.PORTWRIGHT_TEST_PORT ?? 3939)
+const resultsFile = resolve(root, 'test-results', 'vitest.json')
+
+async function main(): Promise<number> {
+  stopCluster(cluster)
+  rmSync(testRoot, { recursive: true, force: true })
+  mkdirSync(resolve(root, 'test-results'), { recursive: true })
+  ensureCluster(cluster)
+  await startCluster(cluster)
+  let server: Awaited<ReturnType<typeof startServer>> | undefined
+  try {
+    await ensureDatabase(cluster, 'portwright')
+    const url = databaseUrl(cluster, 'portwright')
+    await prepareDatabase(url, { seed: true })
+    buildIfStale(root)
+    const secret = randomBytes(32).toString('base64url')
+    const env = {
+      NUXT_DATABASE_URL: url,
+      NUXT_SESSION_PASSWORD: secret,
+      // Tests stand in for many clients by sending X-Forwarded-For.
+      PORTWRIGHT_TRUST_PROXY: '1',
+    }
+    server = await startServer(root, env, appPort)
+    const vitest = spawnSync('npx', [
+      'vitest', 'run', '--config', 'tests/vitest.config.ts',
+      '--reporter=default', '--reporter=json', `--outputFile.json=${resultsFile}`,
+      ...process.argv.slice(2),
+    ], {
+      cwd: root,
+      stdio: 'inherit',
+      env: {
+        ...process.env,
+        ...env,
+        PORTWRIGHT_TEST_URL: `http://127.0.0.1:${appPort}`,
+        PORTWRIGHT_TEST_DATABASE_URL: url,
+        PORTWRIGHT_TEST_ADMIN_URL: databaseUrl(cluster, 'postgres'),
+        PORTWRIGHT_TEST_ROOT: testRoot,
+      },
+    })
+    return vitest.status ?? 1
+  } finally {
+    if (server) await stopProcess(server)
+    stopCluster(cluster)
+  }
+}
+
+/** The plain closing line CI reads: "N passed, N failed". */
+function printSummary(): void {
+  if (!existsSync(resultsFile)) {
+    console.log('0 passed, 1 failed')
+    return
+  }
+  const report = JSON.parse(readFileSync(resultsFile, 'utf8')) as { numPassedTests: number; numFailedTests: number; numPendingTests: number; numTodoTests: number }
+  const skipped = report.numPendingTests + report.numTodoTests
+  console.log(`${report.numPassedTests} passed, ${report.numFailedTests} failed${skipped ? `, ${skipped} skipped` : ''}`)
+}
+
+main()
+  .then((code) => { printSummary(); process.exit(code) })
+  .catch((error) => {
+    console.error(`Test run could not start: ${error instanceof Error ? error.stack : error}`)
+    console.log('0 passed, 1 failed')
+    process.exit(1)
+  })

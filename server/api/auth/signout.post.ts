@@ -1,0 +1,5 @@
+/** Ends this browser's session. */
+export default defineEventHandler(async (event) => {
+  await clearUserSession(event)
+  return { signedOut: true }
+})

@@ -1,0 +1,27 @@
+import { updateNetworkSchema } from '../../../../../shared/schemas/network'
+import { Network } from '../../../../database/models'
+
+/**
+ * Replaces the document (owners and editors). The caller sends the revision its
+ * edit was based on; a stale revision answers 409 and stores nothing.
+ */
+export default defineEventHandler(async (event) => {
+  const { user, project, role } = await requireProjectRole(event, 'editor')
+  const existing = await requireNetwork(event, project.id)
+  const body = await readBodyAs(event, updateNetworkSchema)
+  const document = requireValidDocument(body.document)
+  // One conditional UPDATE: the revision check and the write cannot be split by another writer.
+  const [count, rows] = await Network.update(
+    { document, name: document.name || existing.name, revision: body.revision + 1, updatedBy: user.id },
+    { where: { id: existing.id, revision: body.revision }, returning: true },
+  )
+  if (count === 0) {
+    const current = await Network.findByPk(existing.id)
+    throw createError({
+      statusCode: 409,
+      message: `Someone saved a newer version (revision ${current?.revision}); yours was based on revision ${body.revision}.`,
+      data: { revision: current?.revision },
+    })
+  }
+  return toNetworkDto(rows[0]!, role)
+})

@@ -1,0 +1,24 @@
+import { z } from 'zod'
+
+/** Minimum password length for new accounts. */
+export const PASSWORD_MIN_LENGTH = 12
+
+const email = z.string().trim().toLowerCase().pipe(z.email({ message: 'Enter a valid e-mail address.' }))
+
+/** Sign-up form and route body: guards account creation. */
+export const signUpSchema = z.object({
+  email,
+  name: z.string().trim().min(1, 'Enter your name.').max(120, 'Name is too long (120 characters at most).'),
+  password: z.string()
+    .min(PASSWORD_MIN_LENGTH, `Password must be at least ${PASSWORD_MIN_LENGTH} characters.`)
+    .max(256, 'Password is too long (256 characters at most).'),
+})
+
+/** Sign-in form and route body. */
+export const signInSchema = z.object({
+  email,
+  password: z.string().min(1, 'Enter your password.').max(256, 'Password is too long.'),
+})
+
+export type SignUpInput = z.infer<typeof signUpSchema>
+export type SignInInput = z.infer<typeof signInSchema>

@@ -1,0 +1,77 @@
+import { randomUUID } from 'node:crypto'
+import { appUrl } from './app'
+
+export interface ApiAnswer<T = any> {
+  status: number
+  body: T
+}
+
+let addressCounter = 1
+
+/**
+ * A cookie-keeping API client standing in for one browser. Each client gets its
+ * own client address (X-Forwarded-For, trusted in the test server) so that
+ * sign-in limits of one test do not leak into another.
+ */
+export class ApiClient {
+  cookie = ''
+  readonly address: string
+  origin: string | null
+
+  constructor(options: { address?: string; origin?: string | null } = {}) {
+    this.address = options.address ?? `10.${(addressCounter >> 8) & 255}.${addressCounter++ & 255}.7`
+    this.origin = options.origin === undefined ? appUrl() : options.origin
+  }
+
+  async request<T = any>(method: string, path: string, body?: unknown, headers: Record<string, string> = {}): Promise<ApiAnswer<T>> {
+    const response = await fetch(appUrl(path), {
+      method,
+      redirect: 'manual',
+      headers: {
+        'x-forwarded-for': this.address,
+        ...(this.cookie ? { cookie: this.cookie } : {}),
+        ...(this.origin && method !== 'GET' ? { origin: this.origin } : {}),
+        ...(body !== undefined ? { 'content-type': 'application/json' } : {}),
+        ...headers,
+      },
+      body: body === undefined ? undefined : JSON.stringify(body),
+    })
+    const setCookie = response.headers.getSetCookie()
+    for (const line of setCookie) {
+      const pair = line.split(';')[0]!
+      const [name, value] = [pair.slice(0, pair.indexOf('=')), pair.slice(pair.indexOf('=') + 1)]
+      const others = this.cookie.split('; ').filter(c => c && !c.startsWith(`${name}=`))
+      this.cookie = [...others, ...(value ? [`${name}=${value}`] : [])].join('; ')
+    }
+    const text = await response.text()
+    let parsed: unknown = text
+    try { parsed = text ? JSON.parse(text) : null } catch { /* not JSON */ }
+    return { status: response.status, body: parsed as T }
+  }
+
+  get<T = any>(path: string) { return this.request<T>('GET', path) }
+  post<T = any>(path: string, body?: unknown) { return this.request<T>('POST', path, body ?? {}) }
+  put<T = any>(path: string, body?: unknown) { return this.request<T>('PUT', path, body ?? {}) }
+  patch<T = any>(path: string, body?: unknown) { return this.request<T>('PATCH', path, body ?? {}) }
+  delete<T = any>(path: string) { return this.request<T>('DELETE', path) }
+}
+
+/** Password used for accounts made by tests. */
+export const TEST_PASSWORD = 'test-password-long-enough'
+
+/** Signs up a fresh account and returns its signed-in client. */
+export async function newSignedInUser(name = 'Test Engineer'): Promise<{ client: ApiClient; id: string; email: string }> {
+  const client = new ApiClient()
+  const email = `t-${randomUUID()}@test.example`
+  const answer = await client.post('/api/auth/signup', { email, name, password: TEST_PASSWORD })
+  if (answer.status !== 201) throw new Error(`sign-up failed: ${answer.status} ${JSON.stringify(answer.body)}`)
+  return { client, id: answer.body.id, email }
+}
+
+/** Signs in an existing account (e.g. a demo user). */
+export async function signedIn(email: string, password: string): Promise<ApiClient> {
+  const client = new ApiClient()
+  const answer = await client.post('/api/auth/signin', { email, password })
+  if (answer.status !== 200) throw new Error(`sign-in failed for ${email}: ${answer.status} ${JSON.stringify(answer.body)}`)
+  return client
+}
