@@ -1,0 +1,104 @@
+import { z } from 'zod'
+import type { NetworkDocument, Problem } from './types'
+
+const paramValue = z.union(
+  [z.number(), z.string().max(500, 'expression is too long (500 characters at most)')],
+  { error: 'must be a number or an expression string' },
+)
+
+/** Where the editor draws a block; extra keys are kept for later editor features. */
+export const blockLayoutSchema = z.looseObject({
+  x: z.number(),
+  y: z.number(),
+  rotation: z.union([z.literal(0), z.literal(90), z.literal(180), z.literal(270)]).optional(),
+  flip: z.boolean().optional(),
+})
+
+/** One block: id, type name and parameters; the type itself is checked against the registry later. */
+export const blockSpecSchema = z.looseObject({
+  id: z.string().min(1, 'block id must not be empty'),
+  type: z.string().min(1, 'block type must not be empty'),
+  params: z.record(z.string(), paramValue).default({}),
+  layout: blockLayoutSchema.optional(),
+})
+
+/** A wire: two terminals written BLOCK.N. */
+export const wireSchema = z.tuple([z.string(), z.string()], { error: 'a wire must be a pair of terminals such as ["A.1", "B.2"]' })
+
+/** Sweep as written; values are evaluated later so expressions are allowed. */
+export const sweepSchema = z.looseObject({
+  start: paramValue,
+  stop: paramValue,
+  points: z.number().int('points must be a whole number').min(1, 'points must be at least 1').optional(),
+  spacing: z.enum(['linear', 'log']).optional(),
+})
+
+/** A named planar substrate. */
+export const substrateSchema = z.looseObject({
+  permittivity: paramValue,
+  height: paramValue,
+  thickness: paramValue.optional(),
+  lossTangent: paramValue.optional(),
+  conductivity: paramValue.optional(),
+})
+
+/**
+ * Structural schema of a version-1 network document. It guards the shape only;
+ * units, names and topology are checked by the evaluator and the topology checker.
+ * Unknown keys are accepted and kept, because the contract may be extended.
+ */
+export const networkDocumentSchema = z.looseObject(
+  {
+    format: z.literal('portwright.network'),
+    version: z.literal(1),
+    name: z.string().optional(),
+    referenceImpedance: paramValue.optional(),
+    variables: z.record(z.string(), paramValue).optional(),
+    sweep: sweepSchema.optional(),
+    substrates: z.record(z.string(), substrateSchema).optional(),
+    blocks: z.array(blockSpecSchema),
+    wires: z.array(wireSchema),
+  },
+  { error: (issue) => (issue.input === null || typeof issue.input !== 'object' ? 'a network document must be a JSON object' : undefined) },
+)
+
+/** Result of structural parsing: the typed document or the problems found. */
+export type ParseResult = { ok: true; document: NetworkDocument } | { ok: false; problems: Problem[] }
+
+function pathText(path: PropertyKey[]): string {
+  let text = ''
+  for (const part of path) {
+    if (typeof part === 'number') text += `[${part}]`
+    else text += text ? `.${String(part)}` : String(part)
+  }
+  return text
+}
+
+function blockIdAt(input: unknown, index: number): string | undefined {
+  const blocks = (input as { blocks?: unknown })?.blocks
+  if (!Array.isArray(blocks)) return undefined
+  const id = (blocks[index] as { id?: unknown } | undefined)?.id
+  return typeof id === 'string' && id ? id : undefined
+}
+
+/** Checks the structure of a document; every problem names the offending path and, where known, the block. */
+export function parseNetworkDocument(input: unknown): ParseResult {
+  const parsed = networkDocumentSchema.safeParse(input)
+  if (parsed.success) return { ok: true, document: parsed.data as NetworkDocument }
+  const problems: Problem[] = parsed.error.issues.map((issue) => {
+    const path = pathText(issue.path)
+    const problem: Problem = { message: path ? `${path}: ${issue.message}` : issue.message }
+    if (issue.path[0] === 'blocks' && typeof issue.path[1] === 'number') {
+      const id = blockIdAt(input, issue.path[1])
+      if (id) {
+        problem.block = id
+        problem.message = `block ${id}, ${issue.path.slice(2).map(String).join('.') || 'definition'}: ${issue.message}`
+      }
+      if (issue.path[2] === 'params' && typeof issue.path[3] === 'string') problem.field = issue.path[3]
+    } else if (path) {
+      problem.field = path
+    }
+    return problem
+  })
+  return { ok: false, problems }
+}

@@ -1,0 +1,168 @@
+import { evaluateQuantity } from '../network/expression'
+import { formatQuantity } from '../network/format-quantity'
+import { evaluateParams, type ParamValues } from '../network/params'
+import { parseNetworkDocument } from '../network/schema'
+import { checkTopology } from '../network/topology'
+import type { Evaluated, NetworkDocument, Problem } from '../network/types'
+import { evaluateVariables } from '../network/variables'
+import { BLOCK_MODELS, LATER_BLOCK_TYPES } from './blocks/registry'
+import { CompiledNetwork, type CompileBlock } from './compile'
+import type { JoinOrder } from './join-order'
+import type { SweepSettings } from './sweep'
+import type { CreateContext, NestedNetwork } from './types'
+
+/** Loads the document a `subnetwork` block refers to; `trail` lists the references from the top document down. */
+export type SubnetworkResolver = (ref: string, trail: readonly string[]) => unknown
+
+/** Options of `prepareNetwork`. */
+export interface PrepareOptions {
+  /** Loads subnetwork documents by reference; without it subnetwork blocks are a problem. */
+  resolveSubnetwork?: SubnetworkResolver
+  /** Join order: 'auto' (greedy, the default), 'document' or 'random' (with `seed`); for tests. */
+  joinOrder?: JoinOrder
+  seed?: number
+}
+
+/** A document checked, evaluated and compiled, ready to be solved at any frequencies. */
+export interface PreparedNetwork {
+  document: NetworkDocument
+  ports: number
+  impedances: number[]
+  /** Blocks that take part in the solve (ports included). */
+  blocks: number
+  /** The document's sweep as evaluated; fields it does not give are absent. */
+  sweep?: Partial<SweepSettings>
+  compiled: CompiledNetwork
+}
+
+/** Outcome of `prepareNetwork`: evaluated values are filled in even when other parts fail. */
+export type PrepareResult =
+  | { ok: true; network: PreparedNetwork; evaluated: Evaluated }
+  | { ok: false; problems: Problem[]; evaluated: Evaluated }
+
+const MAX_DEPTH = 16
+
+/**
+ * Checks a network document against the contract, evaluates every expression, checks
+ * the topology and compiles the join order. Never throws for a bad document: each
+ * problem names the block, the field and the reason.
+ */
+export function prepareNetwork(input: unknown, options: PrepareOptions = {}): PrepareResult {
+  return prepareAt(input, options, [])
+}
+
+function prepareAt(input: unknown, options: PrepareOptions, trail: readonly string[]): PrepareResult {
+  const evaluated: Evaluated = { variables: {}, blocks: {}, settings: {} }
+  const parsed = parseNetworkDocument(input)
+  if (!parsed.ok) return { ok: false, problems: parsed.problems, evaluated }
+  const document = parsed.document
+  const problems: Problem[] = []
+
+  const variables = evaluateVariables(document.variables)
+  evaluated.variables = variables.evaluated
+  problems.push(...variables.problems)
+
+  let referenceImpedance = 50
+  if (document.referenceImpedance !== undefined) {
+    const outcome = evaluateQuantity(document.referenceImpedance, 'impedance', variables.scope, variables.failed)
+    const error = !outcome.ok ? outcome.error : outcome.value > 0 ? undefined : `must be greater than zero (got ${formatQuantity(outcome.value, 'impedance')})`
+    if (error) {
+      evaluated.settings.referenceImpedance = { error }
+      problems.push({ field: 'referenceImpedance', message: `referenceImpedance: ${error}` })
+    } else if (outcome.ok) {
+      referenceImpedance = outcome.value
+    }
+  }
+  if (!evaluated.settings.referenceImpedance) {
+    evaluated.settings.referenceImpedance = { value: referenceImpedance, unit: 'Ω', display: formatQuantity(referenceImpedance, 'impedance') }
+  }
+
+  let sweep: Partial<SweepSettings> | undefined
+  if (document.sweep) {
+    sweep = { points: document.sweep.points ?? 201, spacing: document.sweep.spacing ?? 'linear' }
+    evaluated.settings['sweep.points'] = { value: sweep.points, display: String(sweep.points) }
+    for (const field of ['start', 'stop'] as const) {
+      const outcome = evaluateQuantity(document.sweep[field], 'frequency', variables.scope, variables.failed)
+      const error = !outcome.ok ? outcome.error : outcome.value >= 0 ? undefined : `must not be negative (got ${formatQuantity(outcome.value, 'frequency')})`
+      if (error) {
+        evaluated.settings[`sweep.${field}`] = { error }
+        problems.push({ field: `sweep.${field}`, message: `sweep.${field}: ${error}` })
+      } else if (outcome.ok) {
+        sweep[field] = outcome.value
+        evaluated.settings[`sweep.${field}`] = { value: outcome.value, unit: 'Hz', display: formatQuantity(outcome.value, 'frequency') }
+      }
+    }
+  }
+
+  const context = (blockId: string): CreateContext => ({
+    blockId,
+    referenceImpedance,
+    buildNetwork: (doc, label) => nested(prepareAt(doc, { ...options, joinOrder: 'auto' }, trail), label),
+    resolveNetwork: ref => resolve(ref, options, trail),
+  })
+
+  const compileBlocks: CompileBlock[] = []
+  const terminals = new Map<string, number>()
+  const portIndex = new Map<string, number>()
+  for (const block of document.blocks) {
+    const model = BLOCK_MODELS[block.type]
+    if (!model) {
+      const message = LATER_BLOCK_TYPES.has(block.type)
+        ? `block ${block.id}: type "${block.type}" is not available in this version of Portwright yet`
+        : `block ${block.id}: unknown block type "${block.type}" (known types: ${Object.keys(BLOCK_MODELS).join(', ')})`
+      problems.push({ block: block.id, field: 'type', message })
+      continue
+    }
+    if (model.terminals !== undefined) terminals.set(block.id, model.terminals)
+    const outcome = evaluateParams(block.id, block.type, block.params, model.params, { scope: variables.scope, failed: variables.failed, referenceImpedance })
+    evaluated.blocks[block.id] = outcome.evaluated
+    if (block.type === 'port' && typeof outcome.values.index === 'number') portIndex.set(block.id, outcome.values.index)
+    if (outcome.problems.length) {
+      problems.push(...outcome.problems)
+      continue
+    }
+    const blockProblem = (field: string | undefined, message: string): void => {
+      if (field) evaluated.blocks[block.id]![field] = { ...evaluated.blocks[block.id]![field], error: message }
+      problems.push({ block: block.id, ...(field ? { field } : {}), message: `block ${block.id} (${block.type})${field ? `, ${field}` : ''}: ${message}` })
+    }
+    const checks = model.check?.(outcome.values) ?? []
+    for (const check of checks) blockProblem(check.field, check.message)
+    if (checks.length) continue
+    const created = model.create(outcome.values as ParamValues, context(block.id))
+    if (!created.ok) {
+      for (const p of created.problems) blockProblem(p.field, p.message)
+      continue
+    }
+    terminals.set(block.id, created.instance.terminals)
+    compileBlocks.push({ id: block.id, type: block.type, instance: created.instance })
+  }
+
+  problems.push(...checkTopology(document, { terminals: id => terminals.get(id), portIndex: id => portIndex.get(id) }))
+  if (problems.length) return { ok: false, problems, evaluated }
+
+  const compiled = new CompiledNetwork(compileBlocks, document.wires, { joinOrder: options.joinOrder, seed: options.seed })
+  return {
+    ok: true,
+    evaluated,
+    network: { document, ports: compiled.ports, impedances: compiled.impedances, blocks: compiled.blockCount, ...(sweep ? { sweep } : {}), compiled },
+  }
+}
+
+function nested(result: PrepareResult, label: string): { ok: true; network: NestedNetwork } | { ok: false; problems: Problem[] } {
+  if (result.ok) return { ok: true, network: result.network.compiled }
+  return { ok: false, problems: result.problems.map(p => ({ message: `in ${label}: ${p.message}` })) }
+}
+
+function resolve(ref: string, options: PrepareOptions, trail: readonly string[]): { ok: true; network: NestedNetwork } | { ok: false; problems: Problem[] } {
+  if (trail.includes(ref)) return { ok: false, problems: [{ message: `network "${ref}" contains itself: ${[...trail, ref].join(' → ')}` }] }
+  if (trail.length >= MAX_DEPTH) return { ok: false, problems: [{ message: `subnetworks are nested more than ${MAX_DEPTH} deep at "${ref}"` }] }
+  if (!options.resolveSubnetwork) return { ok: false, problems: [{ message: `network "${ref}" cannot be loaded here (no subnetwork loader was given)` }] }
+  let document: unknown
+  try {
+    document = options.resolveSubnetwork(ref, trail)
+  } catch (error) {
+    return { ok: false, problems: [{ message: `network "${ref}" could not be loaded: ${(error as Error).message}` }] }
+  }
+  if (document === undefined || document === null) return { ok: false, problems: [{ message: `network "${ref}" was not found` }] }
+  return nested(prepareAt(document, options, [...trail, ref]), `network "${ref}"`)
+}
