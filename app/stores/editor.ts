@@ -8,6 +8,7 @@ import { defineStore } from 'pinia'
 import { computed, markRaw, ref, shallowRef } from 'vue'
 import type { NetworkDocument, Sweep } from '~~/shared/network/types'
 import type { BlockKind, ParamValue } from '~~/app/utils/editor/blockCatalog'
+import type { Quantity } from '~~/app/utils/editor/traces'
 import { GRID } from '~~/app/utils/editor/blockCatalog'
 import {
   addBlock as addBlockOp, connect as connectOp, disconnect, extractFragment, flipBlocks, moveBlocks as moveBlocksOp,
@@ -16,6 +17,23 @@ import {
 } from '~~/app/utils/editor/documentOps'
 import { createMemorySource, type ChangeOrigin, type DocumentSource, type TransactOptions } from '~~/app/utils/editor/documentSource'
 import { emptyDocument } from '~~/app/utils/editor/emptyDocument'
+
+/** A frequency marker on the plots. */
+export interface Marker { id: number, frequency: number }
+export type ResultsView = 'response' | 'smith' | 'balance' | 'table' | 'spec'
+
+/** How the results dock is set up: view state, not part of the document and not undoable. */
+export interface ResultsSettings {
+  view: ResultsView
+  quantity: Quantity
+  /** Traces on the Response view, by name ("S21"). */
+  traces: string[]
+  /** Reflection traces on the Smith chart. */
+  smithTraces: string[]
+  markers: Marker[]
+  activeMarker: number | null
+  balance: { a: string, b: string, targetDb: number, targetDeg: number }
+}
 
 export interface Selection {
   blocks: string[]
@@ -34,6 +52,26 @@ export const useEditorStore = defineStore('editor', () => {
   const readOnly = ref(false)
   const clipboard = shallowRef<Fragment | null>(null)
   let pasteCount = 0
+  const results = ref<ResultsSettings>({
+    view: 'response', quantity: 'db', traces: [], smithTraces: [], markers: [], activeMarker: null,
+    balance: { a: 'S21', b: 'S31', targetDb: 0, targetDeg: 90 },
+  })
+  let markerIds = 0
+
+  /** Put a marker at a frequency and make it the active one. */
+  function addMarker(frequency: number) {
+    const id = ++markerIds
+    results.value.markers.push({ id, frequency })
+    results.value.activeMarker = id
+  }
+  function moveMarker(id: number, frequency: number) {
+    const m = results.value.markers.find(x => x.id === id)
+    if (m) m.frequency = frequency
+  }
+  function removeMarker(id: number) {
+    results.value.markers = results.value.markers.filter(m => m.id !== id)
+    if (results.value.activeMarker === id) results.value.activeMarker = results.value.markers.at(-1)?.id ?? null
+  }
 
   function attach(next: DocumentSource) {
     unsubscribe()
@@ -208,6 +246,7 @@ export const useEditorStore = defineStore('editor', () => {
   }
 
   return {
+    results, addMarker, moveMarker, removeMarker,
     doc, version, lastOrigin, history, selection, readOnly, clipboard, selectedBlocks, selectedBlock,
     load, replaceDocument, edit, select, selectAll, selectNext,
     addBlock, connect, removeWires, deleteSelection, rotateSelection, flipSelection, moveBlocks, nudgeSelection,

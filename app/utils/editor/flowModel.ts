@@ -65,7 +65,7 @@ function genericTerminals(block: BlockSpec, doc: NetworkDocument) {
     const t = parseTerminal(end)
     if (t && t.block === block.id) max = Math.max(max, t.n)
   }
-  return Array.from({ length: max }, (_, i) => ({ n: i + 1, x: 0, y: i + 1, side: 'left' as Side }))
+  return Array.from({ length: max }, (_, i) => ({ n: i + 1, name: undefined as string | undefined, x: 0, y: i + 1, side: 'left' as Side }))
 }
 
 /** Build the canvas node for one block. */

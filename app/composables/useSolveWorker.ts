@@ -1,0 +1,93 @@
+/**
+ * Runs the solver in a Web Worker. At most one solve is in flight; edits that
+ * arrive meanwhile collapse into one follow-up solve of the newest document,
+ * and a reply for a document that has since changed is dropped. The last good
+ * result stays on screen, marked stale, while the newest document has errors.
+ */
+import { onBeforeUnmount, ref, shallowRef } from 'vue'
+import type { Evaluated, NetworkDocument, Problem } from '~~/shared/network/types'
+import type { SolveReply, SolvedData } from '~~/app/workers/protocol'
+
+export interface SolveState {
+  result: SolvedData | null
+  /** The shown result is older than the document (it has errors, or a solve is running). */
+  stale: boolean
+  problems: Problem[]
+  evaluated: Evaluated | null
+  busy: boolean
+  solveMs: number
+  /** Increments whenever a new result is shown (plots redraw on it). */
+  resultSeq: number
+}
+
+export function useSolveWorker(options: { debounceMs?: number } = {}) {
+  const debounceMs = options.debounceMs ?? 0
+  const result = shallowRef<SolvedData | null>(null)
+  const stale = ref(false)
+  const problems = shallowRef<Problem[]>([])
+  const evaluated = shallowRef<Evaluated | null>(null)
+  const busy = ref(false)
+  const solveMs = ref(0)
+  const resultSeq = ref(0)
+  let worker: Worker | null = null
+  let latest = 0
+  let inFlight = false
+  let pending: NetworkDocument | null = null
+  let timer: ReturnType<typeof setTimeout> | undefined
+
+  function start(): Worker {
+    const w = new Worker(new URL('../workers/solve.worker.ts', import.meta.url), { type: 'module' })
+    w.onmessage = (event: MessageEvent<SolveReply>) => receive(event.data)
+    w.onerror = (event) => {
+      inFlight = false
+      busy.value = false
+      stale.value = true
+      problems.value = [{ message: `The solver stopped: ${event.message || 'unknown error'}` }]
+      worker?.terminate()
+      worker = null
+    }
+    return w
+  }
+
+  function send() {
+    if (!pending || inFlight) return
+    worker ??= start()
+    const document = pending
+    pending = null
+    inFlight = true
+    busy.value = true
+    worker.postMessage({ seq: ++latest, document: JSON.parse(JSON.stringify(document)) })
+  }
+
+  function receive(reply: SolveReply) {
+    inFlight = false
+    if (pending) { send(); return } // a newer document is waiting: this reply is already stale
+    busy.value = false
+    if (reply.seq !== latest) return
+    evaluated.value = reply.evaluated
+    problems.value = reply.problems
+    solveMs.value = reply.solveMs
+    if (reply.result) {
+      result.value = reply.result
+      stale.value = false
+      resultSeq.value++
+    }
+    else stale.value = result.value !== null
+  }
+
+  /** Ask for a solve of this document. */
+  function request(document: NetworkDocument) {
+    pending = document
+    clearTimeout(timer)
+    if (debounceMs > 0) timer = setTimeout(send, debounceMs)
+    else send()
+  }
+
+  onBeforeUnmount(() => {
+    clearTimeout(timer)
+    worker?.terminate()
+    worker = null
+  })
+
+  return { result, stale, problems, evaluated, busy, solveMs, resultSeq, request }
+}

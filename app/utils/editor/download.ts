@@ -1,0 +1,14 @@
+/** Offer text as a file download. */
+export function downloadText(filename: string, text: string, type = 'application/json'): void {
+  const url = URL.createObjectURL(new Blob([text], { type }))
+  const a = document.createElement('a')
+  a.href = url
+  a.download = filename
+  a.click()
+  setTimeout(() => URL.revokeObjectURL(url), 1000)
+}
+
+/** A file name from a network name: letters, digits and dashes. */
+export function fileStem(name: string | undefined): string {
+  return (name ?? 'network').toLowerCase().replace(/[^a-z0-9]+/g, '-').replace(/^-|-$/g, '') || 'network'
+}

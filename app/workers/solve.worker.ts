@@ -1,0 +1,34 @@
+/// <reference lib="webworker" />
+// Solves documents off the main thread so the canvas never waits for the sweep.
+import { prepareNetwork, resolveSweep, solveNetwork, sweepFrequencies } from '../../shared/solver'
+import type { SolveReply, SolveRequest } from './protocol'
+
+function solve(request: SolveRequest): { reply: SolveReply, transfer: Transferable[] } {
+  const t0 = performance.now()
+  const prepared = prepareNetwork(request.document)
+  const base = { seq: request.seq, evaluated: prepared.evaluated ?? null }
+  if (!prepared.ok) return { reply: { ...base, problems: prepared.problems, result: null, solveMs: performance.now() - t0 }, transfer: [] }
+  const sweep = resolveSweep(prepared.network.sweep)
+  if (!sweep.ok) return { reply: { ...base, problems: sweep.problems, result: null, solveMs: performance.now() - t0 }, transfer: [] }
+  const frequencies = sweepFrequencies(sweep.sweep)
+  const solved = solveNetwork(prepared.network, frequencies)
+  if (!solved.ok) return { reply: { ...base, problems: solved.problems, result: null, solveMs: performance.now() - t0 }, transfer: [] }
+  const r = solved.result
+  const result = { ports: r.ports, impedances: [...r.impedances], frequencies: r.frequencies, re: r.re, im: r.im }
+  return {
+    reply: { ...base, problems: [], result, solveMs: performance.now() - t0 },
+    transfer: [r.frequencies.buffer, r.re.buffer, r.im.buffer],
+  }
+}
+
+self.onmessage = (event: MessageEvent<SolveRequest>) => {
+  try {
+    const { reply, transfer } = solve(event.data)
+    self.postMessage(reply, transfer)
+  }
+  catch (error) {
+    const message = error instanceof Error ? error.message : String(error)
+    const reply: SolveReply = { seq: event.data.seq, evaluated: null, problems: [{ message: `The solver failed: ${message}` }], result: null, solveMs: 0 }
+    self.postMessage(reply)
+  }
+}
