@@ -10,21 +10,23 @@ function boxes(doc: NetworkDocument): Box[] {
     const l = layoutOf(b, i)
     const spec = kindSpec(b.type)
     const s = orientedSize(spec?.width ?? 4, spec?.height ?? 4, l.rotation)
-    return { x: l.x, y: l.y, w: s.width * GRID, h: s.height * GRID }
+    // Labels sit below or beside a symbol and run wider than it: reserve room for them.
+    return { x: l.x - 2 * GRID, y: l.y, w: Math.max(s.width, 8) * GRID + 2 * GRID, h: s.height * GRID + 2 * GRID }
   })
 }
 
 /** Nearest spot to `near`, searched outwards on a coarse grid, where a new 4×4 block overlaps nothing (labels included). */
 export function freeSpot(doc: NetworkDocument, near: { x: number, y: number }): { x: number, y: number } {
   const taken = boxes(doc)
-  const step = 6 * GRID
-  const clear = (x: number, y: number) => taken.every(b => x + 4 * GRID + GRID <= b.x || b.x + b.w + GRID <= x || y + 5 * GRID <= b.y || b.y + b.h + 2 * GRID <= y)
+  const stepX = 10 * GRID
+  const stepY = 6 * GRID
+  const clear = (x: number, y: number) => taken.every(b => x + 8 * GRID <= b.x || b.x + b.w <= x - 2 * GRID || y + 6 * GRID <= b.y || b.y + b.h <= y)
   for (let ring = 0; ring < 12; ring++) {
     for (let dy = -ring; dy <= ring; dy++) {
       for (let dx = -ring; dx <= ring; dx++) {
         if (Math.max(Math.abs(dx), Math.abs(dy)) !== ring) continue
-        const x = near.x + dx * step
-        const y = near.y + dy * step
+        const x = near.x + dx * stepX
+        const y = near.y + dy * stepY
         if (clear(x, y)) return { x, y }
       }
     }
