@@ -1,7 +1,8 @@
 import { formatQuantity } from '../network/format-quantity'
 import type { Problem } from '../network/types'
-import { closeLoop, mergeNetworks } from './join-kernels'
-import { JoinQueue, seededRandom, type JoinOrder } from './join-order'
+import { closeLoop, kernelScratch, mergeNetworks } from './join-kernels'
+import type { JoinOrder } from './join-order'
+import { chooseJoinOrder } from './join-plan'
 import type { BlockInstance, NestedNetwork } from './types'
 
 /** A block ready to be joined: its id and instance. Port blocks carry `instance.port`. */
@@ -24,12 +25,42 @@ interface Connection {
   blocks: string[]
 }
 
+interface Item {
+  sockets: number[]
+  buffer: number
+  /** Intermediate results may hand their buffer on once joined; block and constant buffers may not. */
+  pinned: boolean
+}
+
+interface DynamicBlock {
+  instance: BlockInstance
+  buffer: number
+  id: string
+  re: Float64Array
+  im: Float64Array
+}
+
 const MERGE = 0
 const LOOP = 1
 
+/** One join replayed at every frequency: a loop on buffer a, or a merge of a and b over r connections. */
+interface Step {
+  kind: typeof MERGE | typeof LOOP
+  a: number
+  m: number
+  k: number
+  b: number
+  n: number
+  l: number
+  out: number
+  connection: number
+}
+/** Frequencies solved together: long enough to amortise loop overhead, short enough to stay in cache. */
+export const CHUNK = 32
+
 /**
  * A network compiled once per topology into a fixed sequence of joins over buffers
- * allocated once; `solveAt` then fills the blocks and replays the joins at one frequency.
+ * allocated once. Solving fills the blocks for a run of frequencies and replays the joins.
  */
 export class CompiledNetwork implements NestedNetwork {
   readonly ports: number
@@ -42,13 +73,14 @@ export class CompiledNetwork implements NestedNetwork {
 
   private readonly bufRe: Float64Array[] = []
   private readonly bufIm: Float64Array[] = []
-  private readonly dynamic: Array<{ instance: BlockInstance; buffer: number; id: string }> = []
-  // Steps packed as [kind, a, m, k, b, n, l, out, connection] per step.
-  private readonly steps: Int32Array
+  private readonly dynamic: DynamicBlock[] = []
+  private readonly steps: Step[]
   private readonly connections: Connection[]
   private readonly gatherBuffer: Int32Array
   private readonly gatherPosition: Int32Array
   private readonly gatherSize: Int32Array
+  private readonly scratch = kernelScratch(CHUNK)
+  private readonly single = new Float64Array(1)
   private lastFailure: Problem | undefined
 
   constructor(blocks: CompileBlock[], wires: ReadonlyArray<readonly [string, string]>, options: CompileOptions = {}) {
@@ -112,38 +144,64 @@ export class CompiledNetwork implements NestedNetwork {
     this.impedances = portBlocks.map(block => block.instance.port!.impedance)
     this.blockCount = blocks.filter((_, b) => kept(b)).length
 
-    // Items are networks being grown; each lists its sockets (terminal ids, then extra sockets).
-    const items: Array<{ sockets: number[]; buffer: number }> = []
+    // Buffers: one per block (shared by identical blocks), one per distinct constant,
+    // and intermediate results recycled once joined.
+    const items: Item[] = []
     const socketItem: number[] = []
-    const socketConnection: number[] = []
     const externalPort: number[] = []
     const addBuffer = (size: number): number => {
-      this.bufRe.push(new Float64Array(size * size))
-      this.bufIm.push(new Float64Array(size * size))
+      this.bufRe.push(new Float64Array(size * size * CHUNK))
+      this.bufIm.push(new Float64Array(size * size * CHUNK))
       return this.bufRe.length - 1
     }
-    const addItem = (sockets: number[]): number => {
-      const buffer = addBuffer(sockets.length)
-      items.push({ sockets, buffer })
+    const addItem = (sockets: number[], buffer: number, pinned: boolean): number => {
+      items.push({ sockets, buffer, pinned })
       for (const s of sockets) socketItem[s] = items.length - 1
       return items.length - 1
     }
+    const constants = new Map<string, number>()
+    const constantItem = (sockets: number[], re: Float64Array, im: Float64Array): number => {
+      const key = `${sockets.length}:${re.join(',')}:${im.join(',')}`
+      let buffer = constants.get(key)
+      if (buffer === undefined) {
+        buffer = addBuffer(sockets.length)
+        constants.set(key, buffer)
+        spread(re, im, this.bufRe[buffer]!, this.bufIm[buffer]!, CHUNK)
+      }
+      return addItem(sockets, buffer, true)
+    }
+
     let nextSocket = terminalCount
     let reciprocal = true
+    const shared = new Map<string, number>()
     blocks.forEach((block, b) => {
       if (!kept(b) || block.instance.port) return
-      const sockets = Array.from({ length: block.instance.terminals }, (_, t) => base[b]! + t)
-      const item = addItem(sockets)
-      const buffer = items[item]!.buffer
-      reciprocal &&= block.instance.reciprocal
-      if (block.instance.constant) block.instance.fill(0, this.bufRe[buffer]!, this.bufIm[buffer]!)
-      else this.dynamic.push({ instance: block.instance, buffer, id: block.id })
+      const { instance } = block
+      const sockets = Array.from({ length: instance.terminals }, (_, t) => base[b]! + t)
+      reciprocal &&= instance.reciprocal
+      const n = instance.terminals
+      const re = new Float64Array(n * n), im = new Float64Array(n * n)
+      if (instance.constant) {
+        instance.fill(0, re, im)
+        constantItem(sockets, re, im)
+        return
+      }
+      const key = instance.shareKey
+      const existing = key === undefined ? undefined : shared.get(key)
+      if (existing !== undefined) {
+        // Joins only read their inputs, so identical blocks can read one buffer.
+        addItem(sockets, existing, true)
+        return
+      }
+      const buffer = addBuffer(n)
+      if (key !== undefined) shared.set(key, buffer)
+      addItem(sockets, buffer, true)
+      this.dynamic.push({ instance, buffer, id: block.id, re, im })
     })
     this.reciprocal = reciprocal
 
     const connections: Connection[] = []
     const connect = (a: number, b: number, node: string, nodeBlocks: string[]) => {
-      socketConnection[a] = socketConnection[b] = connections.length
       connections.push({ a, b, node, blocks: nodeBlocks })
     }
     const refOf = (t: number): number => {
@@ -159,9 +217,9 @@ export class CompiledNetwork implements NestedNetwork {
       const sameRef = members.every(t => Math.abs(refOf(t) - refOf(members[0]!)) <= 1e-12 * refOf(members[0]!))
       if (members.length === 1) {
         // An unconnected terminal is open: Γ = 1 whatever its reference.
-        const open = addItem([nextSocket++])
-        this.bufRe[items[open]!.buffer]![0] = 1
-        connect(members[0]!, items[open]!.sockets[0]!, node, nodeBlocks)
+        const socket = nextSocket++
+        constantItem([socket], Float64Array.of(1), Float64Array.of(0))
+        connect(members[0]!, socket, node, nodeBlocks)
       } else if (portsHere.length === 0 && elements.length === 2 && sameRef) {
         connect(elements[0]!, elements[1]!, node, nodeBlocks)
       } else if (portsHere.length === 1 && elements.length === 1 && sameRef) {
@@ -169,14 +227,14 @@ export class CompiledNetwork implements NestedNetwork {
       } else {
         // Ideal junction with per-terminal references: S_ij = 2√(G_i G_j)/ΣG − δ_ij.
         const sockets = members.map(() => nextSocket++)
-        const junction = addItem(sockets)
         const g = members.map(t => 1 / refOf(t))
         const total = g.reduce((sum, x) => sum + x, 0)
-        const re = this.bufRe[items[junction]!.buffer]!
         const n = members.length
+        const re = new Float64Array(n * n)
         for (let i = 0; i < n; i++) {
           for (let j = 0; j < n; j++) re[i * n + j] = (2 * Math.sqrt(g[i]! * g[j]!)) / total - (i === j ? 1 : 0)
         }
+        constantItem(sockets, re, new Float64Array(n * n))
         members.forEach((t, i) => {
           const port = blocks[blockOf[t]!]!.instance.port
           if (port) externalPort[sockets[i]!] = port.index - 1
@@ -186,97 +244,56 @@ export class CompiledNetwork implements NestedNetwork {
     }
     this.connections = connections
 
-    // Choose the join order once, simulating item sizes; record each step.
-    const steps: number[] = []
-    const done = new Uint8Array(connections.length)
-    const sizeAfter = (c: number): number => {
-      const x = socketItem[connections[c]!.a]!, y = socketItem[connections[c]!.b]!
-      const nx = items[x]!.sockets.length
-      return x === y ? nx - 2 : nx + items[y]!.sockets.length - 2
+    // Choose the join order once per topology, then record each join as a step.
+    const free = new Map<number, number[]>()
+    const acquire = (size: number): number => free.get(size)?.pop() ?? addBuffer(size)
+    const release = (item: Item): void => {
+      if (item.pinned) return
+      const size = item.sockets.length
+      const list = free.get(size)
+      if (list) list.push(item.buffer)
+      else free.set(size, [item.buffer])
     }
-    const keyOf = (c: number): number => {
-      const x = socketItem[connections[c]!.a]!, y = socketItem[connections[c]!.b]!
-      const work = x === y ? items[x]!.sockets.length : items[x]!.sockets.length + items[y]!.sockets.length
-      return sizeAfter(c) * 65536 + work
-    }
-    const perform = (c: number): number => {
+    const steps: Step[] = []
+    const sequence = chooseJoinOrder(items.map(item => item.sockets), connections, nextSocket, options.joinOrder, options.seed)
+    for (const c of sequence) {
       const { a, b } = connections[c]!
       const x = socketItem[a]!, y = socketItem[b]!
       const ix = items[x]!, iy = items[y]!
       const k = ix.sockets.indexOf(a)
-      done[c] = 1
       if (x === y) {
         const l = ix.sockets.indexOf(b)
         const sockets = ix.sockets.filter((_, i) => i !== k && i !== l)
-        const out = addItem(sockets)
-        steps.push(LOOP, ix.buffer, ix.sockets.length, k, 0, 0, l, items[out]!.buffer, c)
-        return out
+        const out = addItem(sockets, acquire(sockets.length), false)
+        steps.push({ kind: LOOP, a: ix.buffer, m: ix.sockets.length, k, b: 0, n: 0, l, out: items[out]!.buffer, connection: c })
+        release(ix)
+      } else {
+        const l = iy.sockets.indexOf(b)
+        const sockets = [...ix.sockets.filter((_, i) => i !== k), ...iy.sockets.filter((_, i) => i !== l)]
+        const out = addItem(sockets, acquire(sockets.length), false)
+        steps.push({ kind: MERGE, a: ix.buffer, m: ix.sockets.length, k, b: iy.buffer, n: iy.sockets.length, l, out: items[out]!.buffer, connection: c })
+        release(ix)
+        release(iy)
       }
-      const l = iy.sockets.indexOf(b)
-      const sockets = [...ix.sockets.filter((_, i) => i !== k), ...iy.sockets.filter((_, i) => i !== l)]
-      const out = addItem(sockets)
-      steps.push(MERGE, ix.buffer, ix.sockets.length, k, iy.buffer, iy.sockets.length, l, items[out]!.buffer, c)
-      return out
     }
-    const order = options.joinOrder ?? 'auto'
-    if (order === 'auto') {
-      const queue = new JoinQueue()
-      const stamp = new Float64Array(connections.length)
-      connections.forEach((_, c) => {
-        stamp[c] = keyOf(c)
-        queue.push(stamp[c]!, c)
-      })
-      while (queue.size > 0) {
-        const c = queue.pop()
-        if (done[c]) continue
-        const key = keyOf(c)
-        if (key !== stamp[c]) {
-          stamp[c] = key
-          queue.push(key, c)
-          continue
-        }
-        const out = perform(c)
-        for (const s of items[out]!.sockets) {
-          const next = socketConnection[s]
-          if (next === undefined || done[next]) continue
-          const fresh = keyOf(next)
-          if (fresh !== stamp[next]) {
-            stamp[next] = fresh
-            queue.push(fresh, next)
-          }
-        }
-      }
-    } else {
-      const sequence = connections.map((_, c) => c)
-      if (order === 'random') {
-        const random = seededRandom(options.seed ?? 1)
-        for (let i = sequence.length - 1; i > 0; i--) {
-          const j = Math.floor(random() * (i + 1))
-          ;[sequence[i], sequence[j]] = [sequence[j]!, sequence[i]!]
-        }
-      }
-      for (const c of sequence) perform(c)
-    }
-    this.steps = Int32Array.from(steps)
-    this.stepCount = steps.length / 9
+    this.steps = steps
+    this.stepCount = steps.length
 
     // Where each external port ends up: buffer and position of its final item.
     this.gatherBuffer = new Int32Array(this.ports).fill(-1)
     this.gatherPosition = new Int32Array(this.ports)
     this.gatherSize = new Int32Array(this.ports)
-    const live = new Set<number>()
-    for (let s = 0; s < socketItem.length; s++) if (externalPort[s] !== undefined) live.add(socketItem[s]!)
-    for (const item of live) {
-      items[item]!.sockets.forEach((s, position) => {
-        const p = externalPort[s]!
-        this.gatherBuffer[p] = items[item]!.buffer
-        this.gatherPosition[p] = position
-        this.gatherSize[p] = items[item]!.sockets.length
-      })
+    for (let s = 0; s < socketItem.length; s++) {
+      const p = externalPort[s]
+      if (p === undefined) continue
+      const item = items[socketItem[s]!]!
+      this.gatherBuffer[p] = item.buffer
+      this.gatherPosition[p] = item.sockets.indexOf(s)
+      this.gatherSize[p] = item.sockets.length
     }
   }
 
-  /** Why the last `solveAt` failed. */
+  /** Why the last solve failed. */
   failure(): Problem | undefined {
     return this.lastFailure
   }
@@ -286,24 +303,51 @@ export class CompiledNetwork implements NestedNetwork {
    * Returns false (see `failure`) when a join is singular or a block cannot be evaluated.
    */
   solveAt(frequency: number, re: Float64Array, im: Float64Array, offset = 0): boolean {
-    const { bufRe, bufIm, steps, reciprocal } = this
+    this.single[0] = frequency
+    return this.solveRun(this.single, 0, 1, re, im, offset)
+  }
+
+  /**
+   * Solves at every frequency and writes S(i+1)(j+1) at frequency k to index (k·ports + i)·ports + j.
+   * Returns false (see `failure`) at the first frequency that cannot be solved.
+   */
+  solveFrequencies(frequencies: Float64Array, re: Float64Array, im: Float64Array): boolean {
+    const nn = this.ports * this.ports
+    for (let start = 0; start < frequencies.length; start += CHUNK) {
+      const count = Math.min(CHUNK, frequencies.length - start)
+      if (!this.solveRun(frequencies, start, count, re, im, start * nn)) return false
+    }
+    return true
+  }
+
+  private solveRun(frequencies: Float64Array, start: number, count: number, re: Float64Array, im: Float64Array, offset: number): boolean {
+    const { bufRe, bufIm, steps, reciprocal, scratch } = this
     for (const entry of this.dynamic) {
-      if (!entry.instance.fill(frequency, bufRe[entry.buffer]!, bufIm[entry.buffer]!)) {
-        this.lastFailure = entry.instance.failure?.() ?? {
-          block: entry.id,
-          frequency,
-          message: `block ${entry.id} cannot be evaluated at ${formatQuantity(frequency, 'frequency')}`,
+      const n2 = entry.instance.terminals * entry.instance.terminals
+      const targetRe = bufRe[entry.buffer]!, targetIm = bufIm[entry.buffer]!
+      for (let q = 0; q < count; q++) {
+        const frequency = frequencies[start + q]!
+        if (!entry.instance.fill(frequency, entry.re, entry.im)) {
+          this.lastFailure = entry.instance.failure?.() ?? {
+            block: entry.id,
+            frequency,
+            message: `block ${entry.id} cannot be evaluated at ${formatQuantity(frequency, 'frequency')}`,
+          }
+          return false
         }
-        return false
+        for (let e = 0; e < n2; e++) {
+          targetRe[e * CHUNK + q] = entry.re[e]!
+          targetIm[e * CHUNK + q] = entry.im[e]!
+        }
       }
     }
-    for (let s = 0; s < steps.length; s += 9) {
-      const a = steps[s + 1]!, m = steps[s + 2]!, k = steps[s + 3]!, l = steps[s + 6]!, out = steps[s + 7]!
-      const ok = steps[s] === MERGE
-        ? mergeNetworks(bufRe[a]!, bufIm[a]!, m, k, bufRe[steps[s + 4]!]!, bufIm[steps[s + 4]!]!, steps[s + 5]!, l, bufRe[out]!, bufIm[out]!, reciprocal)
-        : closeLoop(bufRe[a]!, bufIm[a]!, m, k, l, bufRe[out]!, bufIm[out]!, reciprocal)
-      if (!ok) {
-        this.lastFailure = this.singular(steps[s + 8]!, frequency)
+    for (const step of steps) {
+      const { a, b, out } = step
+      const failed = step.kind === LOOP
+        ? closeLoop(bufRe[a]!, bufIm[a]!, step.m, step.k, step.l, bufRe[out]!, bufIm[out]!, reciprocal, count, CHUNK, scratch)
+        : mergeNetworks(bufRe[a]!, bufIm[a]!, step.m, step.k, bufRe[b]!, bufIm[b]!, step.n, step.l, bufRe[out]!, bufIm[out]!, reciprocal, count, CHUNK, scratch)
+      if (failed >= 0) {
+        this.lastFailure = this.singular(step.connection, frequencies[start + failed]!)
         return false
       }
     }
@@ -311,19 +355,21 @@ export class CompiledNetwork implements NestedNetwork {
     for (let i = 0; i < n; i++) {
       const bi = this.gatherBuffer[i]!, pi = this.gatherPosition[i]!, size = this.gatherSize[i]!
       for (let j = 0; j < n; j++) {
-        const at = offset + i * n + j
-        if (this.gatherBuffer[j] === bi) {
-          const from = pi * size + this.gatherPosition[j]!
-          re[at] = bufRe[bi]![from]!
-          im[at] = bufIm[bi]![from]!
-        } else {
-          re[at] = 0
-          im[at] = 0
-        }
-        // NaN fails every comparison; a block model pushed past its range must not leak it.
-        if (!(Math.abs(re[at]!) < Infinity && Math.abs(im[at]!) < Infinity)) {
-          this.lastFailure = { frequency, message: `the result is not a finite number at ${formatQuantity(frequency, 'frequency')} (S${i + 1}${j + 1})` }
-          return false
+        const same = this.gatherBuffer[j] === bi
+        const from = (pi * size + this.gatherPosition[j]!) * CHUNK
+        const sourceRe = bufRe[bi]!, sourceIm = bufIm[bi]!
+        for (let q = 0; q < count; q++) {
+          const at = offset + (q * n + i) * n + j
+          const vR = same ? sourceRe[from + q]! : 0
+          const vI = same ? sourceIm[from + q]! : 0
+          // NaN fails every comparison; a block model pushed past its range must not leak it.
+          if (!(Math.abs(vR) < Infinity && Math.abs(vI) < Infinity)) {
+            const frequency = frequencies[start + q]!
+            this.lastFailure = { frequency, message: `the result is not a finite number at ${formatQuantity(frequency, 'frequency')} (S${i + 1}${j + 1})` }
+            return false
+          }
+          re[at] = vR
+          im[at] = vI
         }
       }
     }
@@ -339,5 +385,13 @@ export class CompiledNetwork implements NestedNetwork {
         `the network cannot be solved at ${formatQuantity(frequency, 'frequency')}: at the node ${connection.node} ` +
         `a resonance is cut off from every port, or ideal blocks are shorted onto themselves (blocks ${connection.blocks.join(', ')})`,
     }
+  }
+}
+
+/** Copies one matrix to every frequency slot of a batched buffer. */
+function spread(re: Float64Array, im: Float64Array, targetRe: Float64Array, targetIm: Float64Array, stride: number): void {
+  for (let e = 0; e < re.length; e++) {
+    targetRe.fill(re[e]!, e * stride, (e + 1) * stride)
+    targetIm.fill(im[e]!, e * stride, (e + 1) * stride)
   }
 }

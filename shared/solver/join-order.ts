@@ -8,6 +8,8 @@ export type JoinOrder = 'auto' | 'document' | 'random'
 export class JoinQueue {
   private keys: number[] = []
   private ids: number[] = []
+  /** Key of the entry last returned by `pop`. */
+  poppedKey = Number.NaN
 
   get size(): number {
     return this.ids.length
@@ -31,6 +33,7 @@ export class JoinQueue {
     const count = this.ids.length
     if (count === 0) return -1
     const top = this.ids[0]!
+    this.poppedKey = this.keys[0]!
     const lastKey = this.keys.pop()!
     const lastId = this.ids.pop()!
     if (count > 1) {

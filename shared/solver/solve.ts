@@ -22,11 +22,8 @@ export function solveNetwork(network: PreparedNetwork, frequencies: Float64Array
   const re = new Float64Array(frequencies.length * n * n)
   const im = new Float64Array(frequencies.length * n * n)
   const compiled = network.compiled
-  for (let k = 0; k < frequencies.length; k++) {
-    if (!compiled.solveAt(frequencies[k]!, re, im, k * n * n)) {
-      const failure = compiled.failure()
-      return { ok: false, problems: [failure ?? { frequency: frequencies[k], message: 'the network cannot be solved' }] }
-    }
+  if (!compiled.solveFrequencies(frequencies, re, im)) {
+    return { ok: false, problems: [compiled.failure() ?? { message: 'the network cannot be solved' }] }
   }
   return { ok: true, result: { ports: n, impedances: [...network.impedances], frequencies, re, im } }
 }

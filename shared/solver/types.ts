@@ -19,6 +19,11 @@ export interface BlockInstance {
    * Returns false when it cannot (the reason is then given by `failure`).
    */
   fill(frequency: number, re: Float64Array, im: Float64Array): boolean
+  /**
+   * Instances with the same key always have the same S (same type and parameters), so the
+   * solver fills one buffer for all of them.
+   */
+  shareKey?: string
   /** Why the last `fill` failed. */
   failure?(): Problem | undefined
   /** Set on port blocks only: they mark an external port and are not joined as elements. */

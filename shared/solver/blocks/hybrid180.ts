@@ -48,6 +48,7 @@ export const hybrid180Model: BlockModel = {
         refs,
         reciprocal: true,
         constant: false,
+        shareKey: `hybrid180:ring:${z}:${f0}`,
         fill(frequency, re, im) {
           const q = (Math.PI / 2) * (Math.max(frequency, f0 * DC_FRACTION) / f0)
           const cosQ = Math.cos(q), sinQ = Math.sin(q)

@@ -50,6 +50,7 @@ export const hybrid90Model: BlockModel = {
         refs,
         reciprocal: true,
         constant: false,
+        shareKey: `hybrid90:branch:${z}:${c}:${f0}`,
         fill(frequency, re, im) {
           const theta = (Math.PI / 2) * (Math.max(frequency, f0 * DC_FRACTION) / f0)
           const cosT = Math.cos(theta), sinT = Math.sin(theta)

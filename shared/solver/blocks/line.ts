@@ -18,9 +18,10 @@ export const lineModel: BlockModel = {
         refs: Float64Array.of(z, z),
         reciprocal: true,
         constant: false,
+        shareKey: `line:${z}:${radiansPerHz}:${nepersPerRadian}`,
         fill(frequency, re, im) {
           const theta = radiansPerHz * frequency
-          const amplitude = Math.exp(-nepersPerRadian * theta)
+          const amplitude = nepersPerRadian === 0 ? 1 : Math.exp(-nepersPerRadian * theta)
           const tR = amplitude * Math.cos(theta), tI = -amplitude * Math.sin(theta)
           re[0] = 0; im[0] = 0; re[3] = 0; im[3] = 0
           re[1] = tR; im[1] = tI; re[2] = tR; im[2] = tI

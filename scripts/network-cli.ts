@@ -1,0 +1,71 @@
+/**
+ * What the `solve` and `bench` commands share: reading a document, loading its
+ * subnetworks relative to the file that names them, sweep overrides and problem output.
+ */
+import { existsSync, readFileSync } from 'node:fs'
+import { dirname, resolve } from 'node:path'
+import { evaluateQuantity } from '../shared/network/expression'
+import type { Problem } from '../shared/network/types'
+import type { SubnetworkResolver, SweepSettings } from '../shared/solver/index'
+
+/** Prints one line per problem on standard error and exits with status 2; nothing goes to standard output. */
+export function fail(problems: Array<Problem | string>): never {
+  for (const problem of problems) process.stderr.write(`${typeof problem === 'string' ? problem : problem.message}\n`)
+  process.exit(2)
+}
+
+/** Reads a JSON document, or fails with a one-line reason. */
+export function readDocument(path: string): unknown {
+  let text: string
+  try {
+    text = readFileSync(path, 'utf8')
+  } catch (error) {
+    fail([`${path}: cannot be read (${(error as NodeJS.ErrnoException).code ?? (error as Error).message})`])
+  }
+  try {
+    return JSON.parse(text)
+  } catch (error) {
+    fail([`${path}: not valid JSON (${(error as Error).message})`])
+  }
+}
+
+function locate(from: string, ref: string): string {
+  const path = resolve(dirname(from), ref)
+  return existsSync(path) || path.endsWith('.json') ? path : `${path}.json`
+}
+
+/** Loads subnetwork documents as files, each reference relative to the document that names it. */
+export function fileResolver(documentPath: string): SubnetworkResolver {
+  return (ref, trail) => {
+    let from = resolve(documentPath)
+    for (const step of trail) from = locate(from, step)
+    const path = locate(from, ref)
+    const text = readFileSync(path, 'utf8')
+    return JSON.parse(text)
+  }
+}
+
+/** Turns --start/--stop/--points/--spacing into a sweep override, or fails naming the option. */
+export function sweepOverride(values: { start?: string; stop?: string; points?: string; spacing?: string }): Partial<SweepSettings> {
+  const override: Partial<SweepSettings> = {}
+  const problems: string[] = []
+  for (const field of ['start', 'stop'] as const) {
+    const text = values[field]
+    if (text === undefined) continue
+    const numeric = Number(text)
+    const outcome = evaluateQuantity(Number.isFinite(numeric) && text.trim() !== '' ? numeric : text, 'frequency', new Map())
+    if (outcome.ok) override[field] = outcome.value
+    else problems.push(`--${field}: ${outcome.error}`)
+  }
+  if (values.points !== undefined) {
+    const points = Number(values.points)
+    if (Number.isInteger(points) && points >= 1) override.points = points
+    else problems.push(`--points: must be a whole number of at least 1 (got "${values.points}")`)
+  }
+  if (values.spacing !== undefined) {
+    if (values.spacing === 'linear' || values.spacing === 'log') override.spacing = values.spacing
+    else problems.push(`--spacing: must be linear or log (got "${values.spacing}")`)
+  }
+  if (problems.length) fail(problems)
+  return override
+}
