@@ -1,5 +1,6 @@
 import type { SolvedData } from '~~/app/workers/protocol'
-import { parseTraceName, toDb, toPhaseDeg, traceSamples } from './traces'
+import { magnitudeDb, phaseDeg } from '~~/shared/rf'
+import { parseTraceName, traceSamples } from './traces'
 
 /** Columns and rows of the results table: frequency, then magnitude (dB) and phase (°) of each trace. */
 export function resultsTable(r: SolvedData, traces: string[]): { header: string[], rows: number[][] } {
@@ -7,7 +8,7 @@ export function resultsTable(r: SolvedData, traces: string[]): { header: string[
     const t = parseTraceName(name, r.ports)
     if (!t) return []
     const s = traceSamples(r, t)
-    return [{ head: `${name} dB`, values: toDb(s.re, s.im) }, { head: `${name} deg`, values: toPhaseDeg(s.re, s.im) }]
+    return [{ head: `${name} dB`, values: magnitudeDb(s) }, { head: `${name} deg`, values: phaseDeg(s) }]
   })
   const rows = Array.from(r.frequencies, (f, k) => [f, ...cols.map(c => c.values[k]!)])
   return { header: ['Frequency (Hz)', ...cols.map(c => c.head)], rows }

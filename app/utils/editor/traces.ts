@@ -3,6 +3,7 @@
  * quantities. A trace is one S-parameter, S(i)(j), 1-based.
  */
 import type { SolvedData } from '~~/app/workers/protocol'
+import { groupDelay, magnitudeDb, phaseDeg, unwrapPhaseDeg, vswr } from '~~/shared/rf'
 
 export interface TraceRef { i: number, j: number }
 export type Quantity = 'db' | 'phase' | 'unwrapped' | 'delay' | 'vswr'
@@ -50,63 +51,14 @@ export function traceSamples(r: SolvedData, t: TraceRef): { re: Float64Array, im
   return { re, im }
 }
 
-/** 20·log10|S|. */
-export function toDb(re: Float64Array, im: Float64Array): Float64Array {
-  return re.map((x, k) => 10 * Math.log10(x * x + im[k]! * im[k]!))
-}
-
-/** Phase in degrees, wrapped to (−180°, 180°]. */
-export function toPhaseDeg(re: Float64Array, im: Float64Array): Float64Array {
-  return re.map((x, k) => (Math.atan2(im[k]!, x) * 180) / Math.PI)
-}
-
-/** Phase in degrees with 360° jumps between neighbouring points removed. */
-export function unwrapDeg(wrapped: Float64Array): Float64Array {
-  const out = new Float64Array(wrapped.length)
-  let offset = 0
-  for (let k = 0; k < wrapped.length; k++) {
-    if (k > 0) {
-      const step = wrapped[k]! - wrapped[k - 1]!
-      if (step > 180) offset -= 360
-      else if (step < -180) offset += 360
-    }
-    out[k] = wrapped[k]! + offset
-  }
-  return out
-}
-
-/** Group delay τ = −dφ/dω in seconds, by central differences of the unwrapped phase. */
-export function groupDelay(frequencies: Float64Array, unwrappedDeg: Float64Array): Float64Array {
-  const n = frequencies.length
-  const out = new Float64Array(n).fill(Number.NaN)
-  if (n < 2) return out
-  for (let k = 0; k < n; k++) {
-    const a = Math.max(0, k - 1)
-    const b = Math.min(n - 1, k + 1)
-    const dPhi = ((unwrappedDeg[b]! - unwrappedDeg[a]!) * Math.PI) / 180
-    const dOmega = 2 * Math.PI * (frequencies[b]! - frequencies[a]!)
-    out[k] = -dPhi / dOmega
-  }
-  return out
-}
-
-/** VSWR = (1 + |Γ|)/(1 − |Γ|); infinite for total reflection. */
-export function toVswr(re: Float64Array, im: Float64Array): Float64Array {
-  return re.map((x, k) => {
-    const g = Math.hypot(x, im[k]!)
-    return g >= 1 ? Number.POSITIVE_INFINITY : (1 + g) / (1 - g)
-  })
-}
-
 /** One trace as the chosen quantity. */
 export function traceQuantity(r: SolvedData, t: TraceRef, q: Quantity): Float64Array {
-  const { re, im } = traceSamples(r, t)
-  if (q === 'db') return toDb(re, im)
-  if (q === 'vswr') return toVswr(re, im)
-  const wrapped = toPhaseDeg(re, im)
-  if (q === 'phase') return wrapped
-  const unwrapped = unwrapDeg(wrapped)
-  return q === 'unwrapped' ? unwrapped : groupDelay(r.frequencies, unwrapped)
+  const s = traceSamples(r, t)
+  if (q === 'db') return magnitudeDb(s)
+  if (q === 'vswr') return vswr(s)
+  if (q === 'delay') return groupDelay(s, r.frequencies)
+  const wrapped = phaseDeg(s)
+  return q === 'phase' ? wrapped : unwrapPhaseDeg(wrapped)
 }
 
 /** Index of the sweep point nearest to `f` (frequencies ascending). */
@@ -122,7 +74,7 @@ export function nearestIndex(frequencies: ArrayLike<number>, f: number): number 
   return Math.abs(frequencies[lo]! - f) <= Math.abs(frequencies[hi]! - f) ? lo : hi
 }
 
-/** Difference of two phases in degrees, wrapped to (−180°, 180°]. */
+/** Difference of two phases in degrees, wrapped to (−180°, 180°] (for single readout values). */
 export function phaseDifference(a: number, b: number): number {
   let d = (a - b) % 360
   if (d <= -180) d += 360

@@ -1,7 +1,8 @@
 import { describe, expect, it } from 'vitest'
-import { groupDelay, nearestIndex, parseTraceName, phaseDifference, toDb, toPhaseDeg, toVswr, traceName, traceSamples, unwrapDeg } from '../../../app/utils/editor/traces'
+import { nearestIndex, parseTraceName, phaseDifference, traceName, traceQuantity, traceSamples } from '../../../app/utils/editor/traces'
 import { balance, worstDeviation } from '../../../app/utils/editor/balance'
-import { specPasses, widestBand } from '../../../app/utils/editor/spec'
+import { findBandwidth } from '~~/shared/rf'
+import { specMaskFrom } from '../../../app/utils/editor/specForm'
 import { resultsTable, toTsv } from '../../../app/utils/editor/resultsTable'
 import type { SolvedData } from '../../../app/workers/protocol'
 
@@ -34,28 +35,16 @@ describe('traces', () => {
 
   it('reads the ideal hybrid: −3.01 dB at −90° and 180°, 90° apart', () => {
     const r = idealHybrid()
-    const s21 = traceSamples(r, { i: 2, j: 1 })
-    const s31 = traceSamples(r, { i: 3, j: 1 })
-    expect(toDb(s21.re, s21.im)[1]).toBeCloseTo(-3.0103, 4)
-    expect(toPhaseDeg(s21.re, s21.im)[1]).toBeCloseTo(-90, 9)
-    expect(Math.abs(toPhaseDeg(s31.re, s31.im)[1]!)).toBeCloseTo(180, 9)
+    expect(traceQuantity(r, { i: 2, j: 1 }, 'db')[1]).toBeCloseTo(-3.0103, 4)
+    expect(traceQuantity(r, { i: 2, j: 1 }, 'phase')[1]).toBeCloseTo(-90, 9)
+    expect(Math.abs(traceQuantity(r, { i: 3, j: 1 }, 'phase')[1]!)).toBeCloseTo(180, 9)
+    expect(traceQuantity(r, { i: 1, j: 1 }, 'vswr')[1]).toBe(1)
+    expect(traceQuantity(r, { i: 2, j: 1 }, 'delay')[1]).toBeCloseTo(0, 20)
+    expect(traceSamples(r, { i: 4, j: 2 }).re[0]).toBeCloseTo(-1 / Math.SQRT2, 15)
     const b = balance(r, { i: 2, j: 1 }, { i: 3, j: 1 })
     expect(b.db[1]).toBeCloseTo(0, 12)
     expect(b.deg[1]).toBeCloseTo(90, 9)
     expect(worstDeviation(b.deg, 90, true)).toBeCloseTo(0, 9)
-  })
-
-  it('unwraps phase and gives the delay of a pure time shift', () => {
-    const tau = 1.5e-9
-    const f = Float64Array.from({ length: 101 }, (_, k) => 1e9 + k * 1e7)
-    const wrapped = f.map(x => phaseDifference((-360 * x * tau) % 360, 0))
-    const unwrapped = unwrapDeg(wrapped)
-    for (let k = 1; k < f.length; k++) expect(unwrapped[k]! - unwrapped[k - 1]!).toBeCloseTo(-360 * 1e7 * tau, 6)
-    for (const d of groupDelay(f, unwrapped)) expect(d).toBeCloseTo(tau, 15)
-  })
-
-  it('gives VSWR 1 for a match, 3 for |Γ| = 0.5, infinite for total reflection', () => {
-    expect([...toVswr(new Float64Array([0, 0.5, -1]), new Float64Array([0, 0, 0]))]).toEqual([1, 3, Number.POSITIVE_INFINITY])
   })
 
   it('finds the nearest sweep point', () => {
@@ -73,18 +62,15 @@ describe('traces', () => {
   })
 })
 
-describe('spec mask and band', () => {
-  it('passes the ideal hybrid everywhere and fails an impossible return-loss limit', () => {
+describe('spec form', () => {
+  it('turns the form into a mask the bandwidth finder passes for the ideal hybrid and fails for a wrong phase target', () => {
     const r = idealHybrid()
-    const mask = { returnLossDb: 20, ports: [1, 2, 3, 4], pair: { a: { i: 2, j: 1 }, b: { i: 3, j: 1 } }, maxImbalanceDb: 0.5, targetPhaseDeg: 90, phaseToleranceDeg: 2 }
-    expect(specPasses(r, mask)).toEqual([true, true, true])
-    expect(specPasses(r, { ...mask, targetPhaseDeg: 0 })).toEqual([false, false, false])
-  })
-
-  it('finds the widest passing band and its fractional width', () => {
-    const f = [1, 2, 3, 4, 5, 6]
-    expect(widestBand(f, [true, false, true, true, true, false])).toEqual({ low: 3, high: 5, fractional: 0.5 })
-    expect(widestBand(f, [false, false, false, false, false, false])).toBeNull()
+    const form = { centre: 2.45e9, returnLossDb: 20, ports: 'all' as const, useBalance: true, from: 1, to: [2, 3] as [number, number], maxImbalanceDb: 0.5, targetPhaseDeg: 90, phaseToleranceDeg: 2 }
+    const mask = specMaskFrom(form, 4)
+    expect(mask.conditions).toHaveLength(6)
+    const band = findBandwidth(r, mask)
+    expect(band.ok && [band.low, band.high]).toEqual([2e9, 3e9])
+    expect(findBandwidth(r, specMaskFrom({ ...form, targetPhaseDeg: 0 }, 4)).ok).toBe(false)
   })
 })
 
