@@ -56,7 +56,7 @@ export function useSolveWorker(options: { debounceMs?: number } = {}) {
     pending = null
     inFlight = true
     busy.value = true
-    worker.postMessage({ seq: ++latest, document: JSON.parse(JSON.stringify(document)) })
+    worker.postMessage({ seq: ++latest, document })
   }
 
   function receive(reply: SolveReply) {
