@@ -1,8 +1,8 @@
-import { DataTypes, type QueryInterface } from 'sequelize'
+import { DataTypes, literal, type QueryInterface } from 'sequelize'
 
 const timestamps = {
-  created_at: { type: DataTypes.DATE, allowNull: false, defaultValue: DataTypes.NOW },
-  updated_at: { type: DataTypes.DATE, allowNull: false, defaultValue: DataTypes.NOW },
+  created_at: { type: DataTypes.DATE, allowNull: false, defaultValue: literal('CURRENT_TIMESTAMP') },
+  updated_at: { type: DataTypes.DATE, allowNull: false, defaultValue: literal('CURRENT_TIMESTAMP') },
 }
 
 /** Users, projects with per-project roles, network documents, audit trail, sign-in limiter counters. */
@@ -49,7 +49,7 @@ export async function up(qi: QueryInterface): Promise<void> {
     actor_id: { type: DataTypes.UUID, allowNull: true, references: { model: 'users', key: 'id' }, onDelete: 'SET NULL' },
     action: { type: DataTypes.STRING(64), allowNull: false },
     detail: { type: DataTypes.JSONB, allowNull: false, defaultValue: {} },
-    created_at: { type: DataTypes.DATE, allowNull: false, defaultValue: DataTypes.NOW },
+    created_at: { type: DataTypes.DATE, allowNull: false, defaultValue: literal('CURRENT_TIMESTAMP') },
   })
   await qi.addIndex('audit_events', ['project_id', 'created_at'])
   // Shape required by the sign-in limiter's PostgreSQL store.

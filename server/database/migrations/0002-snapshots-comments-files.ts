@@ -1,4 +1,4 @@
-import { DataTypes, type QueryInterface } from 'sequelize'
+import { DataTypes, literal, type QueryInterface } from 'sequelize'
 
 /** Frozen snapshots of networks, review comments on them, and uploaded files. */
 export async function up(qi: QueryInterface): Promise<void> {
@@ -11,7 +11,7 @@ export async function up(qi: QueryInterface): Promise<void> {
     summary: { type: DataTypes.JSONB, allowNull: false, defaultValue: {} },
     network_revision: { type: DataTypes.INTEGER, allowNull: false },
     created_by: { type: DataTypes.UUID, allowNull: true, references: { model: 'users', key: 'id' }, onDelete: 'SET NULL' },
-    created_at: { type: DataTypes.DATE, allowNull: false, defaultValue: DataTypes.NOW },
+    created_at: { type: DataTypes.DATE, allowNull: false, defaultValue: literal('CURRENT_TIMESTAMP') },
   })
   await qi.addIndex('snapshots', ['network_id', 'created_at'])
   await qi.createTable('comments', {
@@ -22,8 +22,8 @@ export async function up(qi: QueryInterface): Promise<void> {
     body: { type: DataTypes.TEXT, allowNull: false },
     anchor: { type: DataTypes.JSONB, allowNull: false, defaultValue: { kind: 'snapshot' } },
     resolved_at: { type: DataTypes.DATE, allowNull: true },
-    created_at: { type: DataTypes.DATE, allowNull: false, defaultValue: DataTypes.NOW },
-    updated_at: { type: DataTypes.DATE, allowNull: false, defaultValue: DataTypes.NOW },
+    created_at: { type: DataTypes.DATE, allowNull: false, defaultValue: literal('CURRENT_TIMESTAMP') },
+    updated_at: { type: DataTypes.DATE, allowNull: false, defaultValue: literal('CURRENT_TIMESTAMP') },
   })
   await qi.addIndex('comments', ['snapshot_id'])
   await qi.createTable('files', {
@@ -34,7 +34,7 @@ export async function up(qi: QueryInterface): Promise<void> {
     size: { type: DataTypes.INTEGER, allowNull: false },
     data: { type: DataTypes.BLOB, allowNull: false },
     created_by: { type: DataTypes.UUID, allowNull: true, references: { model: 'users', key: 'id' }, onDelete: 'SET NULL' },
-    created_at: { type: DataTypes.DATE, allowNull: false, defaultValue: DataTypes.NOW },
+    created_at: { type: DataTypes.DATE, allowNull: false, defaultValue: literal('CURRENT_TIMESTAMP') },
   })
   await qi.addIndex('files', ['project_id'])
 }
