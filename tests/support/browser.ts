@@ -1,0 +1,45 @@
+import { mkdtempSync, mkdirSync, rmSync } from 'node:fs'
+import { tmpdir } from 'node:os'
+import { join } from 'node:path'
+import { chromium, type BrowserContext, type Page } from 'playwright-core'
+import { appUrl } from './app'
+
+/** Where browser tests leave screenshots. */
+export const screenshotDir = join(process.cwd(), 'test-results', 'screenshots')
+
+/** Debian's Chromium, headless, with a fresh profile and no background network traffic. */
+export async function launchBrowser(): Promise<{ context: BrowserContext; page: Page; close: () => Promise<void> }> {
+  mkdirSync(screenshotDir, { recursive: true })
+  const profile = mkdtempSync(join(tmpdir(), 'portwright-browser-'))
+  const context = await chromium.launchPersistentContext(profile, {
+    executablePath: '/usr/bin/chromium',
+    headless: true,
+    viewport: { width: 1440, height: 900 },
+    args: ['--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync'],
+  })
+  const page = context.pages()[0] ?? await context.newPage()
+  return {
+    context,
+    page,
+    close: async () => {
+      await context.close()
+      rmSync(profile, { recursive: true, force: true })
+    },
+  }
+}
+
+/** Signs in through the sign-in page and waits for the projects list. */
+export async function signIn(page: Page, email: string, password: string): Promise<void> {
+  await page.goto(appUrl('/signin'))
+  await page.getByTestId('signin-email').fill(email)
+  await page.getByTestId('signin-password').fill(password)
+  await page.getByTestId('signin-submit').click()
+  await page.waitForURL(url => !url.pathname.startsWith('/signin'))
+}
+
+/** Saves a full-page screenshot under test-results/screenshots. */
+export async function screenshot(page: Page, name: string): Promise<string> {
+  const path = join(screenshotDir, `${name}.png`)
+  await page.screenshot({ path, fullPage: true })
+  return path
+}
