@@ -1,4 +1,5 @@
 import type { NetworkDocument } from '../../../shared/network/types'
+import { butlerMatrix4x4 } from '../../../shared/examples'
 
 /**
  * Demo designs of the invented lab, one list per demo project. They follow the
@@ -91,6 +92,6 @@ const balancedInputHybrid = {
 }
 
 export const demoNetworks: Record<'beam' | 'balanced', NetworkDocument[]> = {
-  beam: [branchLine, ringHybrid, inPhaseDivider] as unknown as NetworkDocument[],
+  beam: [...[branchLine, ringHybrid, inPhaseDivider] as unknown as NetworkDocument[], { ...butlerMatrix4x4, name: 'Four-beam switch matrix, 2.45 GHz' }],
   balanced: [balancedInputHybrid] as unknown as NetworkDocument[],
 }
