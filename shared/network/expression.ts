@@ -1,9 +1,9 @@
-import { all, create, type MathNode, type Unit } from 'mathjs'
+import { all, create, type FactoryFunctionMap, type MathNode, type Unit } from 'mathjs'
 import { formatQuantity } from './format-quantity'
 import { DIMENSION_NAMES, QUANTITIES, type QuantityKind } from './quantities'
 import type { ParamValue } from './types'
 
-const math = create(all)
+const math = create(all as FactoryFunctionMap)
 const parse = math.parse.bind(math)
 const isValuelessUnit = (name: string): boolean => math.Unit.isValuelessUnit(name)
 

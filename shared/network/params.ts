@@ -93,7 +93,7 @@ export function evaluateParams(
   for (const [field, spec] of Object.entries(specs)) {
     const input = params[field]
     if (spec.kind === 'choice' || spec.kind === 'text') {
-      const text = input ?? spec.default
+      const text = input ?? (spec.kind === 'choice' ? spec.default : undefined)
       if (text === undefined) {
         if (spec.required) fail(field, 'is required')
         continue

@@ -1,4 +1,4 @@
-import { mergeNetworks } from './join-kernels'
+import { kernelScratch, mergeNetworks } from './join-kernels'
 
 /** S-parameters over frequency in the solver's layout (see SolveResult). */
 export interface SParameterData {
@@ -22,6 +22,7 @@ export function renormalize(data: SParameterData, impedances: number[]): SParame
   const im = new Float64Array(points * n * n)
   const curRe = new Float64Array(n * n), curIm = new Float64Array(n * n)
   const nextRe = new Float64Array(n * n), nextIm = new Float64Array(n * n)
+  const scratch = kernelScratch(1)
   const steps = impedances.map((to, i) => {
     const g1 = 1 / data.impedances[i]!, g2 = 1 / to
     const reflect = (g1 - g2) / (g1 + g2), through = (2 * Math.sqrt(g1 * g2)) / (g1 + g2)
@@ -33,7 +34,7 @@ export function renormalize(data: SParameterData, impedances: number[]): SParame
     // Each join moves the current first port to the end, so after n joins the order is restored.
     for (let i = 0; i < n; i++) {
       // A step is never singular against a passive network: its reflection is below 1 in magnitude.
-      mergeNetworks(curRe, curIm, n, 0, steps[i]!.re, steps[i]!.im, 2, 0, nextRe, nextIm, false)
+      mergeNetworks(curRe, curIm, n, 0, steps[i]!.re, steps[i]!.im, 2, 0, nextRe, nextIm, false, 1, 1, scratch)
       curRe.set(nextRe)
       curIm.set(nextIm)
     }
