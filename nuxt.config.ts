@@ -1,8 +1,15 @@
 // Nuxt configuration: one app, one process (pages, API and websocket on one port).
+
+// PORTWRIGHT_BUILD_NAME gives a build its own folders, so that two builds in one checkout
+// (say, a test run and a development server) do not overwrite each other.
+const buildName = process.env.PORTWRIGHT_BUILD_NAME
+const suffix = buildName ? `-${buildName}` : ''
+
 export default defineNuxtConfig({
   compatibilityDate: '2026-11-01',
   devtools: { enabled: false },
   telemetry: false,
+  buildDir: `.nuxt${suffix}`,
   modules: ['@pinia/nuxt', '@nuxtjs/tailwindcss', 'nuxt-auth-utils'],
   css: ['@fontsource/inter/400.css', '@fontsource/inter/500.css', '@fontsource/inter/600.css', '@fontsource/inter/700.css', '~/assets/css/main.css'],
   app: {
@@ -17,7 +24,7 @@ export default defineNuxtConfig({
   tailwindcss: { cssPath: false, viewer: false },
   nitro: {
     experimental: { websocket: true },
-    externals: { inline: [] },
+    output: { dir: `.output${suffix}` },
   },
   runtimeConfig: {
     databaseUrl: '',

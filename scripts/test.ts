@@ -9,10 +9,10 @@ import { startServer, stopProcess } from './lib/server-process'
 
 // The test run's own cluster, port and folders: the start command's data is never touched.
 const root = resolve(import.meta.dirname, '..')
-const testRoot = resolve(root, '.data', 'test')
+const testRoot = resolve(root, '.data', process.env.PORTWRIGHT_BUILD_NAME ? `test-${process.env.PORTWRIGHT_BUILD_NAME}` : 'test')
 const cluster: Cluster = { dataDir: resolve(testRoot, 'postgres'), port: Number(process.env.PORTWRIGHT_TEST_DB_PORT ?? 54339), unsafeFast: true }
 const appPort = Number(process.env.PORTWRIGHT_TEST_PORT ?? 3939)
-const resultsFile = resolve(root, 'test-results', 'vitest.json')
+const resultsFile = resolve(root, 'test-results', process.env.PORTWRIGHT_BUILD_NAME ? `vitest-${process.env.PORTWRIGHT_BUILD_NAME}.json` : 'vitest.json')
 
 async function main(): Promise<number> {
   stopCluster(cluster)
@@ -48,6 +48,8 @@ async function main(): Promise<number> {
         PORTWRIGHT_TEST_DATABASE_URL: url,
         PORTWRIGHT_TEST_ADMIN_URL: databaseUrl(cluster, 'postgres'),
         PORTWRIGHT_TEST_ROOT: testRoot,
+        PORTWRIGHT_TEST_PORT: String(appPort),
+        PORTWRIGHT_TEST_DB_PORT: String(cluster.port),
       },
     })
     return vitest.status ?? 1

@@ -13,9 +13,15 @@ function newestMtime(path: string): number {
   return newest
 }
 
-/** Builds the app when `.output` is missing or older than any source file. */
+/** The built server's folder; PORTWRIGHT_BUILD_NAME selects a separate one (see nuxt.config.ts). */
+export function outputDir(root: string): string {
+  const name = process.env.PORTWRIGHT_BUILD_NAME
+  return join(root, name ? `.output-${name}` : '.output')
+}
+
+/** Builds the app when its output is missing or older than any source file. */
 export function buildIfStale(root: string, force = false): void {
-  const entry = join(root, '.output', 'server', 'index.mjs')
+  const entry = join(outputDir(root), 'server', 'index.mjs')
   const built = existsSync(entry) ? statSync(entry).mtimeMs : 0
   const stale = force || SOURCES.some(s => newestMtime(join(root, s)) > built)
   if (!stale) return

@@ -1,9 +1,10 @@
 import { spawn, type ChildProcess } from 'node:child_process'
 import { join } from 'node:path'
+import { outputDir } from './build'
 
 /** Starts the built server and resolves once /api/health answers ok. */
 export async function startServer(root: string, env: Record<string, string>, port: number, host = '127.0.0.1'): Promise<ChildProcess> {
-  const child = spawn(process.execPath, [join(root, '.output', 'server', 'index.mjs')], {
+  const child = spawn(process.execPath, [join(outputDir(root), 'server', 'index.mjs')], {
     cwd: root,
     env: { ...process.env, ...env, PORT: String(port), HOST: host, NITRO_PORT: String(port), NITRO_HOST: host },
     stdio: ['ignore', 'inherit', 'inherit'],

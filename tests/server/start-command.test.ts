@@ -11,8 +11,9 @@ const root = process.cwd()
 const dataDir = mkdtempSync(join(process.env.PORTWRIGHT_TEST_ROOT!, 'start-'))
 // mkdtemp makes a mode-700 folder; the database runs as the postgres user and must reach inside.
 chmodSync(dataDir, 0o755)
-const port = 3961
-const dbPort = 54361
+// Offsets from the test run's own ports, so that parallel runs (PORTWRIGHT_BUILD_NAME) do not collide.
+const port = Number(process.env.PORTWRIGHT_TEST_PORT) + 22
+const dbPort = Number(process.env.PORTWRIGHT_TEST_DB_PORT) + 22
 const url = `http://127.0.0.1:${port}`
 
 function start(): Promise<{ child: ChildProcess; output: () => string }> {
