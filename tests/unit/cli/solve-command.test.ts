@@ -1,0 +1,146 @@
+import { spawnSync } from 'node:child_process'
+import { mkdirSync, mkdtempSync, writeFileSync } from 'node:fs'
+import { tmpdir } from 'node:os'
+import { join } from 'node:path'
+import { fileURLToPath } from 'node:url'
+import { describe, expect, it } from 'vitest'
+import { branchLineHybrid } from '../../../shared/examples/index'
+import { solveDocument } from '../../../shared/solver/index'
+import { readTouchstone } from './touchstone'
+
+const root = fileURLToPath(new URL('../../../', import.meta.url))
+const run = (script: 'solve' | 'bench', args: string[]) => spawnSync(process.execPath, ['--import', 'tsx', join(root, 'scripts', `${script}.ts`), ...args], { cwd: root, encoding: 'utf8' })
+const folder = mkdtempSync(join(tmpdir(), 'portwright-cli-'))
+const write = (name: string, value: unknown) => {
+  const path = join(folder, name)
+  writeFileSync(path, typeof value === 'string' ? value : JSON.stringify(value))
+  return path
+}
+const example = join(root, 'shared/examples/branch-line-hybrid.json')
+const P = (i: number, impedance?: number) => ({ id: `P${i}`, type: 'port', params: impedance ? { index: i, impedance } : { index: i } })
+
+describe('solve command', { timeout: 60_000 }, () => {
+  it('prints Touchstone that reads back to the solver\'s numbers (through npm run, as documented)', () => {
+    const result = spawnSync('npm', ['run', '-s', 'solve', '--', example], { cwd: root, encoding: 'utf8' })
+    expect(result.status).toBe(0)
+    expect(result.stderr).toBe('')
+    const parsed = readTouchstone(result.stdout, 4)
+    expect(result.stdout).toMatch(/^! Portwright solve: Branch-line quadrature hybrid, 2\.45 GHz\n! 4 ports, 251 frequencies\n# HZ S RI R 50\n/)
+    const solved = solveDocument(branchLineHybrid)
+    expect(solved.ok).toBe(true)
+    if (!solved.ok) return
+    expect(parsed.frequencies).toEqual(Array.from(solved.result.frequencies))
+    parsed.s.forEach((m, k) => m.forEach((row, i) => row.forEach(([re, im], j) => {
+      expect(re).toBe(solved.result.re[(k * 4 + i) * 4 + j])
+      expect(im).toBe(solved.result.im[(k * 4 + i) * 4 + j])
+    })))
+  })
+
+  it('--format json with sweep overrides', () => {
+    const result = run('solve', [example, '--format', 'json', '--start', '2 GHz', '--stop', '3e9', '--points', '3', '--spacing', 'log'])
+    expect(result.status).toBe(0)
+    const json = JSON.parse(result.stdout)
+    expect(json.ports).toBe(4)
+    expect(json.impedances).toEqual([50, 50, 50, 50])
+    expect(json.frequencies[0]).toBe(2e9)
+    expect(json.frequencies[1]).toBeCloseTo(Math.sqrt(6) * 1e9, 0)
+    expect(json.frequencies[2]).toBe(3e9)
+    const solved = solveDocument(branchLineHybrid, { sweep: { start: 2e9, stop: 3e9, points: 3, spacing: 'log' } })
+    if (!solved.ok) throw new Error('example did not solve')
+    expect(json.s[1][2][0]).toEqual([solved.result.re[16 + 8], solved.result.im[16 + 8]])
+  })
+
+  it('ports of different impedance give Touchstone 2.0 with [Reference]', () => {
+    const path = write('unequal.json', {
+      format: 'portwright.network', version: 1, sweep: { start: '1 GHz', stop: '2 GHz', points: 2 },
+      blocks: [P(1), P(2, 75), { id: 'L', type: 'line', params: { impedance: 61.2, degrees: 90, at: '1.5 GHz' } }],
+      wires: [['P1.1', 'L.1'], ['L.2', 'P2.1']],
+    })
+    const result = run('solve', [path])
+    expect(result.status).toBe(0)
+    expect(result.stdout).toMatch(/\[Version\] 2\.0/)
+    expect(result.stdout).toMatch(/\[Reference\] 50 75/)
+    expect(readTouchstone(result.stdout, 2).frequencies).toEqual([1e9, 2e9])
+  })
+
+  it('a bad document exits 2 with one line per problem and nothing on standard output', () => {
+    const path = write('bad.json', {
+      format: 'portwright.network', version: 1, sweep: { start: '1 GHz', stop: '2 GHz', points: 2 },
+      blocks: [P(1), P(3), { id: 'TA', type: 'line', params: { impedance: '2.45 GHz', degrees: 90, at: '1 GHz' } }],
+      wires: [['P1.1', 'TA.1'], ['TA.2', 'P3.1'], ['TA.2', 'NOPE.1']],
+    })
+    const result = run('solve', [path])
+    expect(result.status).toBe(2)
+    expect(result.stdout).toBe('')
+    expect(result.stderr.trim().split('\n')).toEqual([
+      'block TA (line), impedance: "2.45 GHz" is a frequency, but an impedance (Ω) is expected',
+      'wire 3 (TA.2 – NOPE.1): there is no block NOPE',
+      'port indices must run from 1 to 3 without gaps: 2 is missing',
+    ])
+  })
+
+  it('unreadable files, bad JSON, bad options and singular networks also exit 2 without output', () => {
+    for (const args of [[join(folder, 'missing.json')], [write('broken.json', '{ nope')], [example, '--points', 'many'], [example, '--format', 'xml'], [example, '--start', '3 ohm']]) {
+      const result = run('solve', args)
+      expect(result.status, args.join(' ')).toBe(2)
+      expect(result.stdout).toBe('')
+      expect(result.stderr.trim().split('\n')).toHaveLength(1)
+    }
+    const singular = write('singular.json', {
+      format: 'portwright.network', version: 1, sweep: { start: '2.45 GHz', stop: '2.45 GHz', points: 1 },
+      blocks: [P(1), { id: 'SA', type: 'load', params: { end: 'short' } }, { id: 'L', type: 'line', params: { impedance: 50, degrees: 180, at: '2.45 GHz' } }, { id: 'SB', type: 'load', params: { end: 'short' } }],
+      wires: [['P1.1', 'SA.1'], ['SA.1', 'L.1'], ['L.2', 'SB.1']],
+    })
+    const result = run('solve', [singular])
+    expect(result.status).toBe(2)
+    expect(result.stdout).toBe('')
+    expect(result.stderr).toMatch(/cannot be solved at 2\.45 GHz/)
+  })
+
+  it('resolves subnetworks relative to the document that names them', () => {
+    mkdirSync(join(folder, 'parts'), { recursive: true })
+    write('parts/inner.json', {
+      format: 'portwright.network', version: 1,
+      blocks: [P(1), P(2), { id: 'L', type: 'line', params: { impedance: 50, degrees: 90, at: '1 GHz' } }],
+      wires: [['P1.1', 'L.1'], ['L.2', 'P2.1']],
+    })
+    write('parts/section.json', {
+      format: 'portwright.network', version: 1,
+      blocks: [P(1), P(2), { id: 'I', type: 'subnetwork', params: { network: 'inner.json' } }],
+      wires: [['P1.1', 'I.1'], ['I.2', 'P2.1']],
+    })
+    const top = write('top.json', {
+      format: 'portwright.network', version: 1, sweep: { start: '1 GHz', stop: '1 GHz', points: 1 },
+      blocks: [P(1), P(2), { id: 'S', type: 'subnetwork', params: { network: 'parts/section.json' } }],
+      wires: [['P1.1', 'S.1'], ['S.2', 'P2.1']],
+    })
+    const result = run('solve', [top, '--format', 'json'])
+    expect(result.stderr).toBe('')
+    const json = JSON.parse(result.stdout)
+    // A 90° matched line: S21 = −j (Pozar, 4th ed., §2.1).
+    expect(json.s[0][1][0][0]).toBeCloseTo(0, 12)
+    expect(json.s[0][1][0][1]).toBeCloseTo(-1, 12)
+  })
+})
+
+describe('bench command', { timeout: 120_000 }, () => {
+  it('prints one JSON line with points, blocks, median and minimum time', () => {
+    const result = run('bench', [join(root, 'shared/examples/butler-matrix-4x4.json'), '--points', '101', '--repeat', '3'])
+    expect(result.status).toBe(0)
+    const lines = result.stdout.trim().split('\n')
+    expect(lines).toHaveLength(1)
+    const json = JSON.parse(lines[0]!)
+    expect(Object.keys(json)).toEqual(['points', 'blocks', 'medianMs', 'minMs'])
+    expect(json.points).toBe(101)
+    expect(json.blocks).toBe(20)
+    expect(json.minMs).toBeGreaterThan(0)
+    expect(json.medianMs).toBeGreaterThanOrEqual(json.minMs)
+  })
+
+  it('fails like solve on a bad document', () => {
+    const result = run('bench', [write('bad-bench.json', { format: 'portwright.network', version: 1, blocks: [], wires: [] })])
+    expect(result.status).toBe(2)
+    expect(result.stdout).toBe('')
+    expect(result.stderr.trim()).toBe('the network has no ports: add at least one port block')
+  })
+})
