@@ -16,10 +16,10 @@ export async function seedDemo(sequelize: Sequelize, hash: (password: string) =>
       const owner = Object.entries(spec.members).find(([, role]) => role === 'owner')![0] as DemoPersonKey
       const project = await Project.create({ name: spec.name, description: spec.description, createdBy: ids[owner] }, { transaction })
       for (const [key, role] of Object.entries(spec.members)) {
-        await Membership.create({ projectId: project.id, userId: ids[key as DemoPersonKey], role }, { transaction })
+        await Membership.create({ projectId: project.id, userId: ids[key as DemoPersonKey]!, role }, { transaction })
       }
       for (const document of demoNetworks[spec.key]) {
-        await Network.create({ projectId: project.id, name: document.name, document, updatedBy: ids[owner] }, { transaction })
+        await Network.create({ projectId: project.id, name: document.name ?? 'Untitled network', document, updatedBy: ids[owner] }, { transaction })
       }
     }
   })
