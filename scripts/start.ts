@@ -41,8 +41,9 @@ async function main() {
     }
     process.on('SIGINT', shutdown)
     process.on('SIGTERM', shutdown)
-    server.on('exit', (code) => {
-      if (stopping) return
+    server.on('exit', (code, signal) => {
+      // Ctrl-C in a terminal signals the whole process group, the server included.
+      if (stopping || signal === 'SIGINT' || signal === 'SIGTERM') return void shutdown()
       console.error(`The app server stopped unexpectedly (code ${code}).`)
       stopDatabase()
       process.exit(1)
