@@ -356,7 +356,9 @@ export class CompiledNetwork implements NestedNetwork {
       const bi = this.gatherBuffer[i]!, pi = this.gatherPosition[i]!, size = this.gatherSize[i]!
       for (let j = 0; j < n; j++) {
         const same = this.gatherBuffer[j] === bi
-        const from = (pi * size + this.gatherPosition[j]!) * CHUNK
+        const pj = this.gatherPosition[j]!
+        // Reciprocal joins keep only the upper triangle.
+        const from = (reciprocal && pi > pj ? pj * size + pi : pi * size + pj) * CHUNK
         const sourceRe = bufRe[bi]!, sourceIm = bufIm[bi]!
         for (let q = 0; q < count; q++) {
           const at = offset + (q * n + i) * n + j

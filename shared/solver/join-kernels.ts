@@ -2,8 +2,14 @@
  * The two wave-based joining steps of sub-network growth, batched over a run of
  * frequencies. A network of n ports is held as separate real and imaginary
  * Float64Arrays with entry (i, j) at frequency q at index (i·n + j)·stride + q, so the
- * innermost loops run over contiguous frequencies. Neither kernel allocates.
+ * innermost loops run over contiguous frequencies. With `symmetric` (S = Sᵀ) only the upper
+ * triangle (i ≤ j) is read and written, which halves the work. Neither kernel allocates.
  */
+
+/** Index of entry (i, j) of an n-port: from the upper triangle when only that one is kept. */
+function entry(i: number, j: number, n: number, symmetric: boolean): number {
+  return symmetric && i > j ? j * n + i : i * n + j
+}
 
 /** |Δ|² below this means the join has no unique solution: a resonance cut off from every port. */
 export const SINGULAR_THRESHOLD_SQUARED = 1e-20
@@ -40,11 +46,11 @@ export function mergeNetworks(
     t[invI + q] = -dI / dd
   }
   const size = m + n - 2
-  const rowK = k * m, rowL = l * n
+  const rowK = k * m
   for (let i = 0; i < m; i++) {
     if (i === k) continue
     const oi = i < k ? i : i - 1
-    const ik = (i * m + k) * C
+    const ik = entry(i, k, m, symmetric) * C
     for (let q = 0; q < count; q++) {
       const xR = aRe[ik + q]!, xI = aIm[ik + q]!, iR = t[invR + q]!, iI = t[invI + q]!
       const yR = xR * iR - xI * iI, yI = xR * iI + xI * iR
@@ -55,33 +61,31 @@ export function mergeNetworks(
     for (let j = symmetric ? i : 0; j < m; j++) {
       if (j === k) continue
       const oj = j < k ? j : j - 1
-      const src = (i * m + j) * C, kj = (rowK + j) * C
-      const dst = (oi * size + oj) * C, mir = symmetric ? (oj * size + oi) * C : dst
+      const src = (i * m + j) * C, kj = entry(k, j, m, symmetric) * C
+      const dst = (oi * size + oj) * C
       for (let q = 0; q < count; q++) {
         const uR = t[cR + q]!, uI = t[cI + q]!, wR = aRe[kj + q]!, wI = aIm[kj + q]!
         const vR = aRe[src + q]! + uR * wR - uI * wI
         const vI = aIm[src + q]! + uR * wI + uI * wR
         outRe[dst + q] = vR; outIm[dst + q] = vI
-        outRe[mir + q] = vR; outIm[mir + q] = vI
       }
     }
     for (let j = 0; j < n; j++) {
       if (j === l) continue
       const oj = m - 1 + (j < l ? j : j - 1)
-      const lj = (rowL + j) * C
-      const dst = (oi * size + oj) * C, mir = symmetric ? (oj * size + oi) * C : dst
+      const lj = entry(l, j, n, symmetric) * C
+      const dst = (oi * size + oj) * C
       for (let q = 0; q < count; q++) {
         const uR = t[pR + q]!, uI = t[pI + q]!, wR = bRe[lj + q]!, wI = bIm[lj + q]!
         const vR = uR * wR - uI * wI, vI = uR * wI + uI * wR
         outRe[dst + q] = vR; outIm[dst + q] = vI
-        outRe[mir + q] = vR; outIm[mir + q] = vI
       }
     }
   }
   for (let i = 0; i < n; i++) {
     if (i === l) continue
     const oi = m - 1 + (i < l ? i : i - 1)
-    const il = (i * n + l) * C
+    const il = entry(i, l, n, symmetric) * C
     for (let q = 0; q < count; q++) {
       const xR = bRe[il + q]!, xI = bIm[il + q]!, iR = t[invR + q]!, iI = t[invI + q]!
       const yR = xR * iR - xI * iI, yI = xR * iI + xI * iR
@@ -104,14 +108,13 @@ export function mergeNetworks(
     for (let j = symmetric ? i : 0; j < n; j++) {
       if (j === l) continue
       const oj = m - 1 + (j < l ? j : j - 1)
-      const src = (i * n + j) * C, lj = (rowL + j) * C
-      const dst = (oi * size + oj) * C, mir = symmetric ? (oj * size + oi) * C : dst
+      const src = (i * n + j) * C, lj = entry(l, j, n, symmetric) * C
+      const dst = (oi * size + oj) * C
       for (let q = 0; q < count; q++) {
         const uR = t[cR + q]!, uI = t[cI + q]!, wR = bRe[lj + q]!, wI = bIm[lj + q]!
         const vR = bRe[src + q]! + uR * wR - uI * wI
         const vI = bIm[src + q]! + uR * wI + uI * wR
         outRe[dst + q] = vR; outIm[dst + q] = vI
-        outRe[mir + q] = vR; outIm[mir + q] = vI
       }
     }
   }
@@ -131,7 +134,7 @@ export function closeLoop(
   count: number, stride: number, scratch: Float64Array,
 ): number {
   const C = stride
-  const kk = (k * n + k) * C, ll = (l * n + l) * C, kl = (k * n + l) * C, lk = (l * n + k) * C
+  const kk = (k * n + k) * C, ll = (l * n + l) * C, kl = entry(k, l, n, symmetric) * C, lk = entry(l, k, n, symmetric) * C
   const invR = 0, invI = C, uR0 = 2 * C, uI0 = 3 * C, vR0 = 4 * C, vI0 = 5 * C
   // Per-frequency constants of the join: 1 − S_kl, 1 − S_lk, S_kk, S_ll.
   const ekR0 = 6 * C, ekI0 = 7 * C, elR0 = 8 * C, elI0 = 9 * C, kkR0 = 10 * C, kkI0 = 11 * C, llR0 = 12 * C, llI0 = 13 * C
@@ -150,11 +153,10 @@ export function closeLoop(
     t[kkR0 + q] = skkR; t[kkI0 + q] = skkI; t[llR0 + q] = sllR; t[llI0 + q] = sllI
   }
   const size = n - 2
-  const rowK = k * n, rowL = l * n
   for (let i = 0; i < n; i++) {
     if (i === k || i === l) continue
     const oi = i - (i > k ? 1 : 0) - (i > l ? 1 : 0)
-    const ik = (i * n + k) * C, il = (i * n + l) * C
+    const ik = entry(i, k, n, symmetric) * C, il = entry(i, l, n, symmetric) * C
     for (let q = 0; q < count; q++) {
       const ekR = t[ekR0 + q]!, ekI = t[ekI0 + q]!, elR = t[elR0 + q]!, elI = t[elI0 + q]!
       const skkR = t[kkR0 + q]!, skkI = t[kkI0 + q]!, sllR = t[llR0 + q]!, sllI = t[llI0 + q]!
@@ -170,15 +172,14 @@ export function closeLoop(
     for (let j = symmetric ? i : 0; j < n; j++) {
       if (j === k || j === l) continue
       const oj = j - (j > k ? 1 : 0) - (j > l ? 1 : 0)
-      const src = (i * n + j) * C, kj = (rowK + j) * C, lj = (rowL + j) * C
-      const dst = (oi * size + oj) * C, mir = symmetric ? (oj * size + oi) * C : dst
+      const src = (i * n + j) * C, kj = entry(k, j, n, symmetric) * C, lj = entry(l, j, n, symmetric) * C
+      const dst = (oi * size + oj) * C
       for (let q = 0; q < count; q++) {
         const uR = t[uR0 + q]!, uI = t[uI0 + q]!, vR = t[vR0 + q]!, vI = t[vI0 + q]!
         const xR = sRe[kj + q]!, xI = sIm[kj + q]!, yR = sRe[lj + q]!, yI = sIm[lj + q]!
         const rR = sRe[src + q]! + uR * xR - uI * xI + vR * yR - vI * yI
         const rI = sIm[src + q]! + uR * xI + uI * xR + vR * yI + vI * yR
         outRe[dst + q] = rR; outIm[dst + q] = rI
-        outRe[mir + q] = rR; outIm[mir + q] = rI
       }
     }
   }
