@@ -1,6 +1,7 @@
 import type { QueryInterface } from 'sequelize'
 import * as m0001 from './0001-accounts-projects-networks'
 import * as m0002 from './0002-snapshots-comments-files'
+import * as m0003 from './0003-reviews-invitations-mail'
 
 export interface MigrationStep {
   name: string
@@ -12,4 +13,5 @@ export interface MigrationStep {
 export const migrations: MigrationStep[] = [
   { name: '0001-accounts-projects-networks', ...m0001 },
   { name: '0002-snapshots-comments-files', ...m0002 },
+  { name: '0003-reviews-invitations-mail', ...m0003 },
 ]

@@ -9,6 +9,11 @@ export class Comment extends Model<InferAttributes<Comment>, InferCreationAttrib
   declare body: string
   declare anchor: CreationOptional<Record<string, unknown>>
   declare resolvedAt: Date | null
+  declare resolvedBy: CreationOptional<string | null>
+  /** Set when the author changes the body; resolving does not count as an edit. */
+  declare editedAt: CreationOptional<Date | null>
+  /** User ids mentioned in the body, so an edit mails only newly mentioned people. */
+  declare mentions: CreationOptional<string[]>
   declare createdAt: CreationOptional<Date>
   declare updatedAt: CreationOptional<Date>
 
@@ -21,6 +26,9 @@ export class Comment extends Model<InferAttributes<Comment>, InferCreationAttrib
       body: { type: DataTypes.TEXT, allowNull: false },
       anchor: { type: DataTypes.JSONB, allowNull: false, defaultValue: { kind: 'snapshot' } },
       resolvedAt: { type: DataTypes.DATE, allowNull: true },
+      resolvedBy: { type: DataTypes.UUID, allowNull: true },
+      editedAt: { type: DataTypes.DATE, allowNull: true },
+      mentions: { type: DataTypes.JSONB, allowNull: false, defaultValue: [] },
       createdAt: DataTypes.DATE,
       updatedAt: DataTypes.DATE,
     }, { sequelize, tableName: 'comments', underscored: true })

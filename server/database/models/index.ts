@@ -7,12 +7,19 @@ import { Snapshot } from './Snapshot'
 import { Comment } from './Comment'
 import { StoredFile } from './StoredFile'
 import { AuditEvent } from './AuditEvent'
+import { Invitation } from './Invitation'
+import { Review } from './Review'
+import { ReviewReviewer } from './ReviewReviewer'
+import { ReviewEvent } from './ReviewEvent'
+import { OutboxMessage } from './OutboxMessage'
 
 export { User, Project, Membership, Network, Snapshot, Comment, StoredFile, AuditEvent }
+export { Invitation, Review, ReviewReviewer, ReviewEvent, OutboxMessage }
 
 /** Binds every model to one Sequelize instance. */
 export function setupModels(sequelize: Sequelize): void {
   for (const model of [User, Project, Membership, Network, Snapshot, Comment, StoredFile, AuditEvent]) {
     model.setup(sequelize)
   }
+  for (const model of [Invitation, Review, ReviewReviewer, ReviewEvent, OutboxMessage]) model.setup(sequelize)
 }

@@ -1,0 +1,28 @@
+import { z } from 'zod'
+import { Op } from 'sequelize'
+import { AuditEvent } from '../../../database/models'
+import type { AuditEventDto } from '../../../../shared/types/review'
+
+const auditQuery = z.object({
+  before: z.coerce.number().int().positive().optional(),
+  limit: z.coerce.number().int().min(1).max(200).default(100),
+})
+
+/** The project's audit trail, newest first, paged by `before` (an event id) (owners). */
+export default defineEventHandler(async (event): Promise<AuditEventDto[]> => {
+  const query = queryAs(event, auditQuery)
+  const { project } = await requireProjectRole(event, 'owner')
+  const events = await AuditEvent.findAll({
+    where: { projectId: project.id, ...(query.before ? { id: { [Op.lt]: query.before } } : {}) },
+    order: [['id', 'DESC']],
+    limit: query.limit,
+  })
+  const people = await peopleById(events.map(e => e.actorId))
+  return events.map(e => ({
+    id: Number(e.id),
+    action: e.action,
+    actor: e.actorId ? people.get(e.actorId) ?? null : null,
+    detail: e.detail,
+    createdAt: e.createdAt.toISOString(),
+  }))
+})

@@ -1,0 +1,35 @@
+import { createSnapshotSchema } from '../../../../../../../shared/schemas/review'
+import { Snapshot } from '../../../../../../database/models'
+import type { SnapshotDto } from '../../../../../../../shared/types/review'
+
+/**
+ * Freezes the network as saved now (owners and editors): title, note, the full document
+ * and its solver summary. With `revision`, a network saved since then answers 409, so
+ * nobody freezes a version other than the one on their screen.
+ */
+export default defineEventHandler(async (event): Promise<SnapshotDto> => {
+  const body = await readBodyAs(event, createSnapshotSchema)
+  const { user, project, role } = await requireProjectRole(event, 'editor')
+  const network = await requireNetwork(event, project.id)
+  if (body.revision !== undefined && body.revision !== network.revision) {
+    throw createError({
+      statusCode: 409,
+      message: `The network has changed since revision ${body.revision} (it is now at ${network.revision}); reload it before freezing.`,
+      data: { revision: network.revision },
+    })
+  }
+  const summary = await summariseDocument(project.id, network.document)
+  const snapshot = await Snapshot.create({
+    networkId: network.id,
+    title: body.title,
+    note: body.note,
+    document: network.document,
+    summary: summary as unknown as Record<string, unknown>,
+    networkRevision: network.revision,
+    createdBy: user.id,
+  })
+  await recordAudit('snapshot.created', user.id, project.id, { snapshotId: snapshot.id, networkId: network.id, title: snapshot.title, revision: network.revision })
+  setResponseStatus(event, 201)
+  const [item] = await snapshotListItems([snapshot])
+  return { ...item!, projectId: project.id, networkName: network.name, document: snapshot.document, role }
+})

@@ -1,0 +1,43 @@
+import { restoreSnapshotSchema } from '../../../../../../shared/schemas/review'
+import { Network, Snapshot } from '../../../../../database/models'
+import type { RestoreResultDto } from '../../../../../../shared/types/review'
+
+/**
+ * Makes a snapshot's document the live network again (owners and editors). Like a save it
+ * carries the revision the caller has seen, so newer work is never overwritten (409). What
+ * it replaces is first frozen as a snapshot of its own, so a restore can itself be undone
+ * by restoring that one.
+ */
+export default defineEventHandler(async (event): Promise<RestoreResultDto> => {
+  const body = await readBodyAs(event, restoreSnapshotSchema)
+  const { user, project } = await requireProjectRole(event, 'editor')
+  const { snapshot, network } = await requireSnapshot(event, project.id)
+  type Outcome = { stale: number | null } | { kept: Snapshot; revision: number }
+  const outcome = await useDatabase().transaction(async (transaction): Promise<Outcome> => {
+    const live = await Network.findByPk(network.id, { transaction, lock: transaction.LOCK.UPDATE })
+    if (!live || live.revision !== body.revision) return { stale: live?.revision ?? null }
+    const kept = await Snapshot.create({
+      networkId: live.id,
+      title: `Before restoring “${snapshot.title}”`.slice(0, 200),
+      note: `Kept automatically when revision ${live.revision} was replaced by the snapshot “${snapshot.title}”.`,
+      document: live.document,
+      summary: await summariseDocument(project.id, live.document) as unknown as Record<string, unknown>,
+      networkRevision: live.revision,
+      createdBy: user.id,
+    }, { transaction })
+    // The name stays the network's: a snapshot of an older name should not rename it.
+    await live.update({ document: { ...snapshot.document, name: live.document.name ?? live.name }, revision: live.revision + 1, updatedBy: user.id }, { transaction })
+    return { kept, revision: live.revision }
+  })
+  if (!('kept' in outcome)) {
+    throw createError({
+      statusCode: 409,
+      message: `Someone saved a newer version (revision ${outcome.stale}); you had revision ${body.revision}. Reload and restore again if you still want to.`,
+      data: { revision: outcome.stale },
+    })
+  }
+  await recordAudit('snapshot.restored', user.id, project.id, {
+    snapshotId: snapshot.id, title: snapshot.title, networkId: network.id, revision: outcome.revision, keptAsSnapshotId: outcome.kept.id,
+  })
+  return { networkId: network.id, revision: outcome.revision, keptAsSnapshotId: outcome.kept.id }
+})
