@@ -16,7 +16,7 @@ let close: () => Promise<void>
 
 /** "−3.01 dB" or "−90.0°" → number (the readout uses a true minus sign). */
 function readNumber(text: string | null): number {
-  return Number((text ?? '').replace('\u2212', '-').replace(/[^\d.+-eE]/g, ''))
+  return Number.parseFloat((text ?? '').trim().replace('\u2212', '-'))
 }
 
 async function select(id: string) {
