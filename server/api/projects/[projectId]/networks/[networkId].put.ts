@@ -23,5 +23,7 @@ export default defineEventHandler(async (event) => {
       data: { revision: current?.revision },
     })
   }
+  // Open live editors take the saved document in as an update instead of overwriting it later.
+  await liveDocumentSaved(existing.id, document, user.id)
   return toNetworkDto(rows[0]!, role)
 })
