@@ -2,6 +2,7 @@ import type { QueryInterface } from 'sequelize'
 import * as m0001 from './0001-accounts-projects-networks'
 import * as m0002 from './0002-snapshots-comments-files'
 import * as m0003 from './0003-reviews-invitations-mail'
+import * as m0004 from './0004-live-document-updates'
 
 export interface MigrationStep {
   name: string
@@ -14,4 +15,5 @@ export const migrations: MigrationStep[] = [
   { name: '0001-accounts-projects-networks', ...m0001 },
   { name: '0002-snapshots-comments-files', ...m0002 },
   { name: '0003-reviews-invitations-mail', ...m0003 },
+  { name: '0004-live-document-updates', ...m0004 },
 ]

@@ -12,9 +12,12 @@ import { Review } from './Review'
 import { ReviewReviewer } from './ReviewReviewer'
 import { ReviewEvent } from './ReviewEvent'
 import { OutboxMessage } from './OutboxMessage'
+import { NetworkLiveState } from './NetworkLiveState'
+import { NetworkUpdate } from './NetworkUpdate'
 
 export { User, Project, Membership, Network, Snapshot, Comment, StoredFile, AuditEvent }
 export { Invitation, Review, ReviewReviewer, ReviewEvent, OutboxMessage }
+export { NetworkLiveState, NetworkUpdate }
 
 /** Binds every model to one Sequelize instance. */
 export function setupModels(sequelize: Sequelize): void {
@@ -22,4 +25,5 @@ export function setupModels(sequelize: Sequelize): void {
     model.setup(sequelize)
   }
   for (const model of [Invitation, Review, ReviewReviewer, ReviewEvent, OutboxMessage]) model.setup(sequelize)
+  for (const model of [NetworkLiveState, NetworkUpdate]) model.setup(sequelize)
 }
