@@ -1,0 +1,197 @@
+/**
+ * Live co-editing: all of the editor's Yjs wiring sits here. The network's
+ * document lives in a Yjs document synced with the server over y-websocket;
+ * the editor store works on it through a DocumentSource (`createLiveSource`),
+ * so every local edit is one Yjs transaction and remote edits arrive as store
+ * changes. Undo and redo take back only this user's own changes (Y.UndoManager
+ * tracks the local origin only). Presence carries the selection; the server
+ * stamps who each person is.
+ *
+ * Edits made while the connection is down stay in the Yjs document and are
+ * sent when it is back (y-websocket's sync exchange). They live in this tab
+ * only: a reload while offline loses them.
+ */
+import { onBeforeUnmount, ref, shallowRef, watch } from 'vue'
+import * as Y from 'yjs'
+import { WebsocketProvider } from 'y-websocket'
+import type { NetworkDocument } from '~~/shared/network/types'
+import type { NetworkDto } from '~~/shared/types/api'
+import { hasNetwork, NETWORK_ROOT, readNetwork, writeNetwork } from '~~/shared/live/network-ydoc'
+import { useEditorStore } from '~~/app/stores/editor'
+import type { ChangeOrigin, DocumentSource } from '~~/app/utils/editor/documentSource'
+import { peersFrom, type PresencePeer } from '~~/app/utils/editor/presence'
+
+/** Where the live connection stands, as the indicator shows it. */
+export type LiveStatus = 'connecting' | 'live' | 'offline' | 'unavailable' | 'refused'
+
+function deepFreeze<T>(value: T): T {
+  if (value && typeof value === 'object' && !Object.isFrozen(value)) {
+    Object.freeze(value)
+    for (const v of Object.values(value as object)) deepFreeze(v)
+  }
+  return value
+}
+
+export interface LiveSourceOptions {
+  /** Window in which edits with one merge key form one undo step. @default 1000 */
+  mergeWindowMs?: number
+  /** Clock, replaceable in tests. @default Date.now */
+  now?: () => number
+}
+
+/** A DocumentSource over a Yjs document that already holds a network; `destroy` detaches it. */
+export function createLiveSource(doc: Y.Doc, options: LiveSourceOptions = {}): DocumentSource & { destroy: () => void } {
+  const mergeWindow = options.mergeWindowMs ?? 1000
+  const now = options.now ?? Date.now
+  const root = doc.getMap(NETWORK_ROOT)
+  const localOrigin = { local: true }
+  const replaceOrigin = { replace: true }
+  // Only transactions with the local origin are tracked: remote edits are never undone here.
+  const undoManager = new Y.UndoManager(root, { trackedOrigins: new Set([localOrigin]), captureTimeout: mergeWindow })
+  const listeners = new Set<(d: NetworkDocument, origin: ChangeOrigin) => void>()
+  let current = deepFreeze(readNetwork(doc))
+  let lastMerge: { key: string, at: number } | null = null
+
+  // afterTransaction (registered after the undo manager's own) sees the undo stacks already updated.
+  const onTransaction = (tr: Y.Transaction) => {
+    // The document holds nothing but the network, so any changed type is a change of it.
+    if (tr.changed.size === 0) return
+    current = deepFreeze(readNetwork(doc))
+    let origin: ChangeOrigin = 'remote'
+    if (tr.origin === localOrigin) origin = 'local'
+    else if (tr.origin === replaceOrigin) origin = 'replace'
+    else if (tr.origin === undoManager) origin = undoManager.redoing ? 'redo' : 'undo'
+    if (origin !== 'local') lastMerge = null
+    for (const l of listeners) l(current, origin)
+  }
+  doc.on('afterTransaction', onTransaction)
+
+  return {
+    snapshot: () => current,
+    transact(edit, opts = {}) {
+      const draft = structuredClone(current) as NetworkDocument
+      edit(draft)
+      if (JSON.stringify(draft) === JSON.stringify(current)) return false
+      const t = now()
+      const merging = opts.mergeKey !== undefined && lastMerge?.key === opts.mergeKey && t - lastMerge.at < mergeWindow
+      if (!merging) undoManager.stopCapturing()
+      lastMerge = opts.mergeKey !== undefined ? { key: opts.mergeKey, at: t } : null
+      doc.transact(() => writeNetwork(doc, draft), localOrigin)
+      return true
+    },
+    replace(next, opts = {}) {
+      undoManager.stopCapturing()
+      lastMerge = null
+      doc.transact(() => writeNetwork(doc, next), opts.undoable ? localOrigin : replaceOrigin)
+      if (!opts.undoable) undoManager.clear()
+    },
+    undo: () => undoManager.undo() !== null,
+    redo: () => undoManager.redo() !== null,
+    canUndo: () => undoManager.canUndo(),
+    canRedo: () => undoManager.canRedo(),
+    subscribe(listener) {
+      listeners.add(listener)
+      return () => listeners.delete(listener)
+    },
+    destroy() {
+      doc.off('afterTransaction', onTransaction)
+      undoManager.destroy()
+      listeners.clear()
+    },
+  }
+}
+
+export interface LiveNetworkOptions {
+  /** How long to wait for the first sync before editing without live co-editing. @default 8000 */
+  connectTimeoutMs?: number
+}
+
+/**
+ * Connects the editor store to the live document of `network`. Until the first
+ * sync the editor is read-only (the server's copy decides); if no sync comes in
+ * time, live editing is given up for this visit and `status` says so (the page
+ * then saves through the API as before).
+ */
+export function useLiveNetwork(network: NetworkDto, options: LiveNetworkOptions = {}) {
+  const store = useEditorStore()
+  const status = ref<LiveStatus>('connecting')
+  const peers = shallowRef<PresencePeer[]>([])
+  /** True once the store edits the live document. */
+  const active = ref(false)
+  const message = ref('')
+  let mayWrite = network.role === 'owner' || network.role === 'editor'
+  const doc = new Y.Doc()
+  let source: ReturnType<typeof createLiveSource> | null = null
+  const wsBase = `${location.protocol === 'https:' ? 'wss' : 'ws'}://${location.host}/live/networks`
+  // BroadcastChannel between tabs is off: every change goes through the server, which enforces roles.
+  const provider = new WebsocketProvider(wsBase, network.id, doc, { disableBc: true, maxBackoffTime: 4000 })
+  store.readOnly = true
+
+  const timeout = setTimeout(() => {
+    if (active.value) return
+    status.value = 'unavailable'
+    message.value = 'Live co-editing is not reachable; changes are saved without it.'
+    provider.destroy()
+    store.readOnly = !mayWrite
+  }, options.connectTimeoutMs ?? 8000)
+
+  function attach() {
+    if (active.value || !hasNetwork(doc)) return
+    clearTimeout(timeout)
+    source = createLiveSource(doc)
+    store.load(readNetwork(doc), { readOnly: !mayWrite, source })
+    active.value = true
+  }
+
+  function refreshStatus() {
+    if (status.value === 'refused' || status.value === 'unavailable') return
+    if (provider.wsconnected && provider.synced) status.value = 'live'
+    else status.value = active.value ? 'offline' : 'connecting'
+  }
+
+  provider.on('sync', (isSynced: boolean) => {
+    if (isSynced) attach()
+    refreshStatus()
+  })
+  provider.on('status', refreshStatus)
+  provider.on('connection-close', async (event) => {
+    const code = event?.code ?? 0
+    if (code === 4401 || code === 4403) {
+      status.value = 'refused'
+      message.value = code === 4401 ? 'Your session has ended; sign in again to keep editing.' : 'You no longer have access to this network.'
+      store.readOnly = true
+    } else if (code === 4509) {
+      // Role changed: ask the API for the new one; the provider reconnects on its own.
+      try {
+        const fresh = await $fetch<NetworkDto>(`/api/projects/${network.projectId}/networks/${network.id}`)
+        mayWrite = fresh.role === 'owner' || fresh.role === 'editor'
+        store.readOnly = !mayWrite
+        message.value = `Your role is now ${fresh.role}.`
+      } catch {
+        store.readOnly = true
+      }
+    } else if (code === 4400 || code === 4413) {
+      status.value = 'refused'
+      message.value = 'The server refused a change from this editor; reload to continue.'
+      store.readOnly = true
+    }
+    refreshStatus()
+  })
+
+  provider.awareness.on('change', () => {
+    peers.value = peersFrom(provider.awareness.getStates() as Map<number, Record<string, unknown>>, doc.clientID)
+  })
+  watch(() => store.selection.blocks, (blocks) => {
+    provider.awareness.setLocalStateField('selection', [...blocks])
+  }, { immediate: true })
+
+  function dispose() {
+    clearTimeout(timeout)
+    provider.destroy()
+    source?.destroy()
+    doc.destroy()
+  }
+  onBeforeUnmount(dispose)
+
+  return { status, peers, active, message, dispose }
+}
