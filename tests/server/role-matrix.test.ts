@@ -1,17 +1,19 @@
 import { readdirSync, statSync } from 'node:fs'
 import { join, relative } from 'node:path'
 import { beforeAll, describe, expect, it } from 'vitest'
-import { ApiClient, newSignedInUser } from '../support/http'
+import { ApiClient, newSignedInUser, signedIn } from '../support/http'
+import { invitationToken, mailDuring, outboxList } from '../support/mail'
 
 /**
  * Every API route × every kind of caller. The table is the access policy; the
  * test discovers the route files, so a new route without a row fails here, and a
  * route that forgets its check answers a refused caller with 2xx and fails too.
  */
-type Actor = 'anonymous' | 'outsider' | 'viewer' | 'reviewer' | 'editor' | 'owner'
-type Rule = 'public' | 'signed-in' | 'viewer' | 'reviewer' | 'editor' | 'owner'
+// 'admin' is the demo site administrator, a member of no project; rule 'admin' is for site-administrator routes.
+type Actor = 'anonymous' | 'outsider' | 'admin' | 'viewer' | 'reviewer' | 'editor' | 'owner'
+type Rule = 'public' | 'signed-in' | 'admin' | 'viewer' | 'reviewer' | 'editor' | 'owner'
 
-const actors: Actor[] = ['anonymous', 'outsider', 'viewer', 'reviewer', 'editor', 'owner']
+const actors: Actor[] = ['anonymous', 'outsider', 'admin', 'viewer', 'reviewer', 'editor', 'owner']
 const rank: Record<string, number> = { viewer: 0, reviewer: 1, editor: 2, owner: 3 }
 
 interface Fixture {
@@ -21,6 +23,10 @@ interface Fixture {
   networkId: string
   targetUserId: string
   spare: { id: string; email: string }
+  /** User ids of the project members by role. */
+  ids: Record<'viewer' | 'reviewer' | 'editor' | 'owner', string>
+  /** A snapshot of the matrix network, for routes that only read or comment on one. */
+  snapshotId: string
 }
 
 interface RouteCase {
@@ -69,6 +75,54 @@ const policy: Record<string, RouteCase> = {
       return { path: `/api/projects/${f.projectId}/networks/${f.networkId}`, body: { revision: current.body.revision, document: networkDoc('Matrix network') } }
     },
   },
+  'GET /api/admin/outbox': { rule: 'admin', prepare: async () => ({ path: '/api/admin/outbox' }) },
+  'GET /api/admin/outbox/:messageId': { rule: 'admin', prepare: async () => ({ path: `/api/admin/outbox/${(await outboxList())[0]!.id}` }) },
+  'GET /api/invitations/:token': { rule: 'public', prepare: async f => ({ path: `/api/invitations/${(await invitation(f, f.projectId)).token}` }) },
+  'POST /api/invitations/:token/accept': {
+    rule: 'signed-in',
+    // A throwaway project: an outsider who accepts must stay an outsider of the matrix project.
+    prepare: async f => ({ path: `/api/invitations/${(await invitation(f, await throwawayProject(f))).token}/accept` }),
+  },
+  'GET /api/projects/:projectId/audit': { rule: 'owner', prepare: async f => ({ path: `/api/projects/${f.projectId}/audit` }) },
+  'GET /api/projects/:projectId/invitations': { rule: 'owner', prepare: async f => ({ path: `/api/projects/${f.projectId}/invitations` }) },
+  'POST /api/projects/:projectId/invitations': { rule: 'owner', prepare: async f => ({ path: `/api/projects/${f.projectId}/invitations`, body: { email: `inv-${crypto.randomUUID()}@test.example`, role: 'viewer' } }) },
+  'DELETE /api/projects/:projectId/invitations/:invitationId': { rule: 'owner', prepare: async f => ({ path: `/api/projects/${f.projectId}/invitations/${(await invitation(f, f.projectId)).id}` }) },
+  'GET /api/projects/:projectId/networks/:networkId/snapshots': { rule: 'viewer', prepare: async f => ({ path: `/api/projects/${f.projectId}/networks/${f.networkId}/snapshots` }) },
+  'POST /api/projects/:projectId/networks/:networkId/snapshots': { rule: 'editor', prepare: async f => ({ path: `/api/projects/${f.projectId}/networks/${f.networkId}/snapshots`, body: { title: 'Matrix snapshot' } }) },
+  'GET /api/projects/:projectId/snapshots/:snapshotId': { rule: 'viewer', prepare: async f => ({ path: `/api/projects/${f.projectId}/snapshots/${f.snapshotId}` }) },
+  'GET /api/projects/:projectId/snapshots/:snapshotId/compare': { rule: 'viewer', prepare: async f => ({ path: `/api/projects/${f.projectId}/snapshots/${f.snapshotId}/compare?with=live` }) },
+  'POST /api/projects/:projectId/snapshots/:snapshotId/restore': {
+    rule: 'editor',
+    prepare: async (f) => {
+      const current = await f.owner.get(`/api/projects/${f.projectId}/networks/${f.networkId}`)
+      return { path: `/api/projects/${f.projectId}/snapshots/${f.snapshotId}/restore`, body: { revision: current.body.revision } }
+    },
+  },
+  'GET /api/projects/:projectId/snapshots/:snapshotId/comments': { rule: 'viewer', prepare: async f => ({ path: `/api/projects/${f.projectId}/snapshots/${f.snapshotId}/comments` }) },
+  'POST /api/projects/:projectId/snapshots/:snapshotId/comments': { rule: 'reviewer', prepare: async f => ({ path: `/api/projects/${f.projectId}/snapshots/${f.snapshotId}/comments`, body: { body: 'Matrix comment' } }) },
+  'PATCH /api/projects/:projectId/comments/:commentId': {
+    rule: 'reviewer',
+    prepare: async (f, actor) => {
+      // Only authors edit their words: an allowed actor edits its own comment.
+      const author = actor === 'reviewer' || actor === 'editor' || actor === 'owner' ? f.clients[actor] : f.owner
+      const made = await author.post(`/api/projects/${f.projectId}/snapshots/${f.snapshotId}/comments`, { body: 'To be edited' })
+      return { path: `/api/projects/${f.projectId}/comments/${made.body.id}`, body: { body: 'Edited by the matrix' } }
+    },
+  },
+  'GET /api/projects/:projectId/snapshots/:snapshotId/reviews': { rule: 'viewer', prepare: async f => ({ path: `/api/projects/${f.projectId}/snapshots/${f.snapshotId}/reviews` }) },
+  'POST /api/projects/:projectId/snapshots/:snapshotId/reviews': {
+    rule: 'editor',
+    prepare: async f => ({ path: `/api/projects/${f.projectId}/snapshots/${await freshSnapshot(f)}/reviews`, body: { reviewerIds: [f.ids.reviewer] } }),
+  },
+  'GET /api/projects/:projectId/reviews': { rule: 'viewer', prepare: async f => ({ path: `/api/projects/${f.projectId}/reviews` }) },
+  'POST /api/projects/:projectId/reviews/:reviewId/decision': {
+    rule: 'reviewer',
+    prepare: async (f, actor) => ({ path: `/api/projects/${f.projectId}/reviews/${await reviewFor(f, actor)}/decision`, body: { decision: 'clear' } }),
+  },
+  'POST /api/projects/:projectId/reviews/:reviewId/withdraw': {
+    rule: 'editor',
+    prepare: async f => ({ path: `/api/projects/${f.projectId}/reviews/${await reviewFor(f, 'reviewer')}/withdraw` }),
+  },
   'DELETE /api/projects/:projectId/networks/:networkId': {
     rule: 'editor',
     prepare: async (f) => {
@@ -87,6 +141,28 @@ async function throwawayProject(f: Fixture): Promise<string> {
     await f.owner.post(`/api/projects/${made.body.id}/members`, { email, role })
   }
   return made.body.id
+}
+
+/** A fresh snapshot of the matrix network (a snapshot takes one open review at a time). */
+async function freshSnapshot(f: Fixture): Promise<string> {
+  return (await f.owner.post(`/api/projects/${f.projectId}/networks/${f.networkId}/snapshots`, { title: 'Matrix review' })).body.id
+}
+
+/** A review awaiting decisions that `actor` was asked for when its role may decide; otherwise the reviewer's. */
+async function reviewFor(f: Fixture, actor: Actor): Promise<string> {
+  const decider = actor === 'reviewer' || actor === 'editor' || actor === 'owner' ? actor : 'reviewer'
+  // Nobody reviews their own request, so the owner's review is requested by the editor.
+  const requester = decider === 'owner' ? f.clients.editor : f.owner
+  const made = await requester.post(`/api/projects/${f.projectId}/snapshots/${await freshSnapshot(f)}/reviews`, { reviewerIds: [f.ids[decider]] })
+  return made.body.id
+}
+
+/** An invitation of a fresh address into `projectId`, with the token from its e-mail. */
+async function invitation(f: Fixture, projectId: string): Promise<{ id: string; token: string }> {
+  const email = `inv-${crypto.randomUUID()}@test.example`
+  let id = ''
+  const mail = await mailDuring([email], async () => { id = (await f.owner.post(`/api/projects/${projectId}/invitations`, { email, role: 'viewer' })).body.id })
+  return { id, token: invitationToken(mail[0]!) }
 }
 
 /** Every route file under server/api as "METHOD /api/path/:param". */
@@ -112,7 +188,9 @@ function expectedStatus(rule: Rule, actor: Actor): 'allowed' | number {
   if (rule === 'public') return 'allowed'
   if (actor === 'anonymous') return 401
   if (rule === 'signed-in') return 'allowed'
-  if (actor === 'outsider') return 404
+  // Site-administrator routes answer 404 to everyone else, as a project does to outsiders.
+  if (rule === 'admin') return actor === 'admin' ? 'allowed' : 404
+  if (actor === 'outsider' || actor === 'admin') return 404
   return rank[actor]! >= rank[rule]! ? 'allowed' : 403
 }
 
@@ -130,14 +208,20 @@ beforeAll(async () => {
   }
   await owner.client.post(`/api/projects/${projectId}/members`, { email: others.target.email, role: 'viewer' })
   const network = await owner.client.post(`/api/projects/${projectId}/networks`, { name: 'Matrix network' })
+  const snapshot = await owner.client.post(`/api/projects/${projectId}/networks/${network.body.id}/snapshots`, { title: 'Matrix snapshot' })
+  const admin = await signedIn('ada@quillmere.example', 'quillmere-demo-2026')
   fixture = {
     owner: owner.client,
-    clients: { anonymous: new ApiClient(), outsider: others.outsider.client, viewer: others.viewer.client, reviewer: others.reviewer.client, editor: others.editor.client, owner: owner.client },
+    clients: { anonymous: new ApiClient(), outsider: others.outsider.client, admin, viewer: others.viewer.client, reviewer: others.reviewer.client, editor: others.editor.client, owner: owner.client },
     projectId,
     networkId: network.body.id,
     targetUserId: others.target.id,
     spare: { id: spare.id, email: spare.email },
+    ids: { viewer: others.viewer.id, reviewer: others.reviewer.id, editor: others.editor.id, owner: owner.id },
+    snapshotId: snapshot.body.id,
   }
+  // The outbox rows need at least one message to open.
+  await invitation(fixture, projectId)
 })
 
 describe('role matrix', () => {
