@@ -3,6 +3,7 @@ import type { Problem } from '../network/types'
 import { closeLoop, kernelScratch, mergeNetworks } from './join-kernels'
 import type { JoinOrder } from './join-order'
 import { chooseJoinOrder } from './join-plan'
+import { blocksReachingPorts, groupNets, terminalLayout, type TerminalLayout } from './nets'
 import type { BlockInstance, NestedNetwork } from './types'
 
 /** A block ready to be joined: its id and instance. Port blocks carry `instance.port`. */
@@ -84,213 +85,37 @@ export class CompiledNetwork implements NestedNetwork {
   private lastFailure: Problem | undefined
 
   constructor(blocks: CompileBlock[], wires: ReadonlyArray<readonly [string, string]>, options: CompileOptions = {}) {
-    const base: number[] = []
-    const byId = new Map<string, number>()
-    let terminalCount = 0
-    blocks.forEach((block, b) => {
-      base.push(terminalCount)
-      byId.set(block.id, b)
-      terminalCount += block.instance.terminals
-    })
-    const blockOf = new Int32Array(terminalCount)
-    blocks.forEach((block, b) => blockOf.fill(b, base[b]!, base[b]! + block.instance.terminals))
-    const terminal = (text: string): number => {
-      const dot = text.lastIndexOf('.')
-      return base[byId.get(text.slice(0, dot))!]! + Number(text.slice(dot + 1)) - 1
-    }
-    const terminalName = (t: number): string => `${blocks[blockOf[t]!]!.id}.${t - base[blockOf[t]!]! + 1}`
-
-    // Nets: terminals joined through wires.
-    const parent = Int32Array.from({ length: terminalCount }, (_, i) => i)
-    const find = (i: number): number => {
-      while (parent[i] !== i) {
-        parent[i] = parent[parent[i]!]!
-        i = parent[i]!
-      }
-      return i
-    }
-    for (const [x, y] of wires) {
-      const rx = find(terminal(x)), ry = find(terminal(y))
-      if (rx !== ry) parent[rx] = ry
-    }
-    const nets = new Map<number, number[]>()
-    for (let t = 0; t < terminalCount; t++) {
-      const root = find(t)
-      const members = nets.get(root)
-      if (members) members.push(t)
-      else nets.set(root, [t])
-    }
-
-    // Blocks in a part of the network that reaches no port cannot change S; they are left out.
-    const blockParent = Int32Array.from({ length: blocks.length }, (_, i) => i)
-    const findBlock = (i: number): number => {
-      while (blockParent[i] !== i) i = blockParent[i] = blockParent[blockParent[i]!]!
-      return i
-    }
-    for (const members of nets.values()) {
-      for (const t of members) {
-        const ra = findBlock(blockOf[t]!), rb = findBlock(blockOf[members[0]!]!)
-        if (ra !== rb) blockParent[ra] = rb
-      }
-    }
-    const reachesPort = new Set<number>()
-    blocks.forEach((block, b) => {
-      if (block.instance.port) reachesPort.add(findBlock(b))
-    })
-    const kept = (b: number) => reachesPort.has(findBlock(b))
-
+    const layout = terminalLayout(blocks)
+    const nets = groupNets(layout, wires)
+    const kept = blocksReachingPorts(blocks, layout, nets)
     const portBlocks = blocks.filter(block => block.instance.port).sort((p, q) => p.instance.port!.index - q.instance.port!.index)
     this.ports = portBlocks.length
     this.impedances = portBlocks.map(block => block.instance.port!.impedance)
     this.blockCount = blocks.filter((_, b) => kept(b)).length
 
-    // Buffers: one per block (shared by identical blocks), one per distinct constant,
-    // and intermediate results recycled once joined.
-    const items: Item[] = []
-    const socketItem: number[] = []
-    const externalPort: number[] = []
-    const addBuffer = (size: number): number => {
-      this.bufRe.push(new Float64Array(size * size * CHUNK))
-      this.bufIm.push(new Float64Array(size * size * CHUNK))
-      return this.bufRe.length - 1
-    }
-    const addItem = (sockets: number[], buffer: number, pinned: boolean): number => {
-      items.push({ sockets, buffer, pinned })
-      for (const s of sockets) socketItem[s] = items.length - 1
-      return items.length - 1
-    }
-    const constants = new Map<string, number>()
-    const constantItem = (sockets: number[], re: Float64Array, im: Float64Array): number => {
-      const key = `${sockets.length}:${re.join(',')}:${im.join(',')}`
-      let buffer = constants.get(key)
-      if (buffer === undefined) {
-        buffer = addBuffer(sockets.length)
-        constants.set(key, buffer)
-        spread(re, im, this.bufRe[buffer]!, this.bufIm[buffer]!, CHUNK)
-      }
-      return addItem(sockets, buffer, true)
-    }
-
-    let nextSocket = terminalCount
+    const space = new Workspace(this.bufRe, this.bufIm, layout.count)
     let reciprocal = true
-    const shared = new Map<string, number>()
     blocks.forEach((block, b) => {
       if (!kept(b) || block.instance.port) return
-      const { instance } = block
-      const sockets = Array.from({ length: instance.terminals }, (_, t) => base[b]! + t)
-      reciprocal &&= instance.reciprocal
-      const n = instance.terminals
-      const re = new Float64Array(n * n), im = new Float64Array(n * n)
-      if (instance.constant) {
-        instance.fill(0, re, im)
-        constantItem(sockets, re, im)
-        return
-      }
-      const key = instance.shareKey
-      const existing = key === undefined ? undefined : shared.get(key)
-      if (existing !== undefined) {
-        // Joins only read their inputs, so identical blocks can read one buffer.
-        addItem(sockets, existing, true)
-        return
-      }
-      const buffer = addBuffer(n)
-      if (key !== undefined) shared.set(key, buffer)
-      addItem(sockets, buffer, true)
-      this.dynamic.push({ instance, buffer, id: block.id, re, im })
+      reciprocal &&= block.instance.reciprocal
+      const dynamic = space.addBlock(block, layout.base[b]!)
+      if (dynamic) this.dynamic.push(dynamic)
     })
     this.reciprocal = reciprocal
-
-    const connections: Connection[] = []
-    const connect = (a: number, b: number, node: string, nodeBlocks: string[]) => {
-      connections.push({ a, b, node, blocks: nodeBlocks })
-    }
-    const refOf = (t: number): number => {
-      const instance = blocks[blockOf[t]!]!.instance
-      return instance.port ? instance.port.impedance : instance.refs[t - base[blockOf[t]!]!]!
-    }
-    for (const members of nets.values()) {
-      if (!kept(blockOf[members[0]!]!)) continue
-      const elements = members.filter(t => !blocks[blockOf[t]!]!.instance.port)
-      const portsHere = members.filter(t => blocks[blockOf[t]!]!.instance.port)
-      const node = members.map(terminalName).join(', ')
-      const nodeBlocks = [...new Set(members.map(t => blocks[blockOf[t]!]!.id))]
-      const sameRef = members.every(t => Math.abs(refOf(t) - refOf(members[0]!)) <= 1e-12 * refOf(members[0]!))
-      if (members.length === 1) {
-        // An unconnected terminal is open: Γ = 1 whatever its reference.
-        const socket = nextSocket++
-        constantItem([socket], Float64Array.of(1), Float64Array.of(0))
-        connect(members[0]!, socket, node, nodeBlocks)
-      } else if (portsHere.length === 0 && elements.length === 2 && sameRef) {
-        connect(elements[0]!, elements[1]!, node, nodeBlocks)
-      } else if (portsHere.length === 1 && elements.length === 1 && sameRef) {
-        externalPort[elements[0]!] = blocks[blockOf[portsHere[0]!]!]!.instance.port!.index - 1
-      } else {
-        // Ideal junction with per-terminal references: S_ij = 2√(G_i G_j)/ΣG − δ_ij.
-        const sockets = members.map(() => nextSocket++)
-        const g = members.map(t => 1 / refOf(t))
-        const total = g.reduce((sum, x) => sum + x, 0)
-        const n = members.length
-        const re = new Float64Array(n * n)
-        for (let i = 0; i < n; i++) {
-          for (let j = 0; j < n; j++) re[i * n + j] = (2 * Math.sqrt(g[i]! * g[j]!)) / total - (i === j ? 1 : 0)
-        }
-        constantItem(sockets, re, new Float64Array(n * n))
-        members.forEach((t, i) => {
-          const port = blocks[blockOf[t]!]!.instance.port
-          if (port) externalPort[sockets[i]!] = port.index - 1
-          else connect(t, sockets[i]!, node, nodeBlocks)
-        })
-      }
-    }
-    this.connections = connections
-
-    // Choose the join order once per topology, then record each join as a step.
-    const free = new Map<number, number[]>()
-    const acquire = (size: number): number => free.get(size)?.pop() ?? addBuffer(size)
-    const release = (item: Item): void => {
-      if (item.pinned) return
-      const size = item.sockets.length
-      const list = free.get(size)
-      if (list) list.push(item.buffer)
-      else free.set(size, [item.buffer])
-    }
-    const steps: Step[] = []
-    const sequence = chooseJoinOrder(items.map(item => item.sockets), connections, nextSocket, options.joinOrder, options.seed)
-    for (const c of sequence) {
-      const { a, b } = connections[c]!
-      const x = socketItem[a]!, y = socketItem[b]!
-      const ix = items[x]!, iy = items[y]!
-      const k = ix.sockets.indexOf(a)
-      if (x === y) {
-        const l = ix.sockets.indexOf(b)
-        const sockets = ix.sockets.filter((_, i) => i !== k && i !== l)
-        const out = addItem(sockets, acquire(sockets.length), false)
-        steps.push({ kind: LOOP, a: ix.buffer, m: ix.sockets.length, k, b: 0, n: 0, l, out: items[out]!.buffer, connection: c })
-        release(ix)
-      } else {
-        const l = iy.sockets.indexOf(b)
-        const sockets = [...ix.sockets.filter((_, i) => i !== k), ...iy.sockets.filter((_, i) => i !== l)]
-        const out = addItem(sockets, acquire(sockets.length), false)
-        steps.push({ kind: MERGE, a: ix.buffer, m: ix.sockets.length, k, b: iy.buffer, n: iy.sockets.length, l, out: items[out]!.buffer, connection: c })
-        release(ix)
-        release(iy)
-      }
-    }
-    this.steps = steps
-    this.stepCount = steps.length
+    this.connections = connectNets(blocks, layout, nets.filter(members => kept(layout.blockOf[members[0]!]!)), space)
+    this.steps = recordSteps(space, this.connections, options)
+    this.stepCount = this.steps.length
 
     // Where each external port ends up: buffer and position of its final item.
     this.gatherBuffer = new Int32Array(this.ports).fill(-1)
     this.gatherPosition = new Int32Array(this.ports)
     this.gatherSize = new Int32Array(this.ports)
-    for (let s = 0; s < socketItem.length; s++) {
-      const p = externalPort[s]
-      if (p === undefined) continue
-      const item = items[socketItem[s]!]!
+    space.externalPort.forEach((p, socket) => {
+      const item = space.items[space.socketItem[socket]!]!
       this.gatherBuffer[p] = item.buffer
-      this.gatherPosition[p] = item.sockets.indexOf(s)
+      this.gatherPosition[p] = item.sockets.indexOf(socket)
       this.gatherSize[p] = item.sockets.length
-    }
+    })
   }
 
   /** Why the last solve failed. */
@@ -321,10 +146,26 @@ export class CompiledNetwork implements NestedNetwork {
   }
 
   private solveRun(frequencies: Float64Array, start: number, count: number, re: Float64Array, im: Float64Array, offset: number): boolean {
-    const { bufRe, bufIm, steps, reciprocal, scratch } = this
+    const { bufRe, bufIm, reciprocal, scratch } = this
+    if (!this.fillBlocks(frequencies, start, count)) return false
+    for (const step of this.steps) {
+      const { a, b, out } = step
+      const failed = step.kind === LOOP
+        ? closeLoop(bufRe[a]!, bufIm[a]!, step.m, step.k, step.l, bufRe[out]!, bufIm[out]!, reciprocal, count, CHUNK, scratch)
+        : mergeNetworks(bufRe[a]!, bufIm[a]!, step.m, step.k, bufRe[b]!, bufIm[b]!, step.n, step.l, bufRe[out]!, bufIm[out]!, reciprocal, count, CHUNK, scratch)
+      if (failed >= 0) {
+        this.lastFailure = this.singular(step.connection, frequencies[start + failed]!)
+        return false
+      }
+    }
+    return this.gather(frequencies, start, count, re, im, offset)
+  }
+
+  /** Writes every frequency-dependent block's S into its buffer slots for this run. */
+  private fillBlocks(frequencies: Float64Array, start: number, count: number): boolean {
     for (const entry of this.dynamic) {
       const n2 = entry.instance.terminals * entry.instance.terminals
-      const targetRe = bufRe[entry.buffer]!, targetIm = bufIm[entry.buffer]!
+      const targetRe = this.bufRe[entry.buffer]!, targetIm = this.bufIm[entry.buffer]!
       for (let q = 0; q < count; q++) {
         const frequency = frequencies[start + q]!
         if (!entry.instance.fill(frequency, entry.re, entry.im)) {
@@ -341,16 +182,12 @@ export class CompiledNetwork implements NestedNetwork {
         }
       }
     }
-    for (const step of steps) {
-      const { a, b, out } = step
-      const failed = step.kind === LOOP
-        ? closeLoop(bufRe[a]!, bufIm[a]!, step.m, step.k, step.l, bufRe[out]!, bufIm[out]!, reciprocal, count, CHUNK, scratch)
-        : mergeNetworks(bufRe[a]!, bufIm[a]!, step.m, step.k, bufRe[b]!, bufIm[b]!, step.n, step.l, bufRe[out]!, bufIm[out]!, reciprocal, count, CHUNK, scratch)
-      if (failed >= 0) {
-        this.lastFailure = this.singular(step.connection, frequencies[start + failed]!)
-        return false
-      }
-    }
+    return true
+  }
+
+  /** Copies the final items' entries into port order; refuses to hand on a non-finite number. */
+  private gather(frequencies: Float64Array, start: number, count: number, re: Float64Array, im: Float64Array, offset: number): boolean {
+    const { bufRe, bufIm, reciprocal } = this
     const n = this.ports
     for (let i = 0; i < n; i++) {
       const bi = this.gatherBuffer[i]!, pi = this.gatherPosition[i]!, size = this.gatherSize[i]!
@@ -388,6 +225,162 @@ export class CompiledNetwork implements NestedNetwork {
         `a resonance is cut off from every port, or ideal blocks are shorted onto themselves (blocks ${connection.blocks.join(', ')})`,
     }
   }
+}
+
+/**
+ * The networks being grown while compiling: items (socket lists with a buffer), which item
+ * holds each socket, which sockets are external ports, and the buffers themselves.
+ * Blocks and constants keep their buffers; intermediate results hand theirs on once joined.
+ */
+class Workspace {
+  readonly items: Item[] = []
+  readonly socketItem: number[] = []
+  readonly externalPort: number[] = []
+  nextSocket: number
+  private readonly constants = new Map<string, number>()
+  private readonly shared = new Map<string, number>()
+  private readonly free = new Map<number, number[]>()
+
+  constructor(private readonly re: Float64Array[], private readonly im: Float64Array[], terminalCount: number) {
+    this.nextSocket = terminalCount
+  }
+
+  addBuffer(size: number): number {
+    this.re.push(new Float64Array(size * size * CHUNK))
+    this.im.push(new Float64Array(size * size * CHUNK))
+    return this.re.length - 1
+  }
+
+  addItem(sockets: number[], buffer: number, pinned: boolean): Item {
+    const item = { sockets, buffer, pinned }
+    this.items.push(item)
+    for (const s of sockets) this.socketItem[s] = this.items.length - 1
+    return item
+  }
+
+  /** An item whose S never changes; equal constants share one buffer. */
+  constantItem(sockets: number[], re: Float64Array, im: Float64Array): Item {
+    const key = `${sockets.length}:${re.join(',')}:${im.join(',')}`
+    let buffer = this.constants.get(key)
+    if (buffer === undefined) {
+      buffer = this.addBuffer(sockets.length)
+      this.constants.set(key, buffer)
+      spread(re, im, this.re[buffer]!, this.im[buffer]!, CHUNK)
+    }
+    return this.addItem(sockets, buffer, true)
+  }
+
+  /** Adds a block's item; returns what must be filled per frequency, if anything. */
+  addBlock(block: CompileBlock, base: number): DynamicBlock | undefined {
+    const { instance } = block
+    const n = instance.terminals
+    const sockets = Array.from({ length: n }, (_, t) => base + t)
+    const re = new Float64Array(n * n), im = new Float64Array(n * n)
+    if (instance.constant) {
+      instance.fill(0, re, im)
+      this.constantItem(sockets, re, im)
+      return undefined
+    }
+    const key = instance.shareKey
+    const existing = key === undefined ? undefined : this.shared.get(key)
+    if (existing !== undefined) {
+      // Joins only read their inputs, so identical blocks can read one buffer.
+      this.addItem(sockets, existing, true)
+      return undefined
+    }
+    const buffer = this.addBuffer(n)
+    if (key !== undefined) this.shared.set(key, buffer)
+    this.addItem(sockets, buffer, true)
+    return { instance, buffer, id: block.id, re, im }
+  }
+
+  acquire(size: number): number {
+    return this.free.get(size)?.pop() ?? this.addBuffer(size)
+  }
+
+  release(item: Item): void {
+    if (item.pinned) return
+    const list = this.free.get(item.sockets.length)
+    if (list) list.push(item.buffer)
+    else this.free.set(item.sockets.length, [item.buffer])
+  }
+}
+
+/**
+ * Turns each net into joins: two terminals of one reference are joined directly, a port
+ * alone with one terminal of its reference makes that terminal external, an open terminal
+ * meets a constant Γ = 1, and anything else goes through an ideal junction.
+ */
+function connectNets(blocks: readonly CompileBlock[], layout: TerminalLayout, nets: readonly number[][], space: Workspace): Connection[] {
+  const connections: Connection[] = []
+  const instanceOf = (t: number) => blocks[layout.blockOf[t]!]!.instance
+  const refOf = (t: number): number => {
+    const instance = instanceOf(t)
+    return instance.port ? instance.port.impedance : instance.refs[t - layout.base[layout.blockOf[t]!]!]!
+  }
+  for (const members of nets) {
+    const elements = members.filter(t => !instanceOf(t).port)
+    const portsHere = members.filter(t => instanceOf(t).port)
+    const node = members.map(layout.name).join(', ')
+    const nodeBlocks = [...new Set(members.map(t => blocks[layout.blockOf[t]!]!.id))]
+    const connect = (a: number, b: number) => connections.push({ a, b, node, blocks: nodeBlocks })
+    const sameRef = members.every(t => Math.abs(refOf(t) - refOf(members[0]!)) <= 1e-12 * refOf(members[0]!))
+    if (members.length === 1) {
+      // An unconnected terminal is open: Γ = 1 whatever its reference.
+      const socket = space.nextSocket++
+      space.constantItem([socket], Float64Array.of(1), Float64Array.of(0))
+      connect(members[0]!, socket)
+    } else if (portsHere.length === 0 && elements.length === 2 && sameRef) {
+      connect(elements[0]!, elements[1]!)
+    } else if (portsHere.length === 1 && elements.length === 1 && sameRef) {
+      space.externalPort[elements[0]!] = instanceOf(portsHere[0]!).port!.index - 1
+    } else {
+      // Ideal junction with per-terminal references: S_ij = 2√(G_i G_j)/ΣG − δ_ij.
+      const sockets = members.map(() => space.nextSocket++)
+      const g = members.map(t => 1 / refOf(t))
+      const total = g.reduce((sum, x) => sum + x, 0)
+      const n = members.length
+      const re = new Float64Array(n * n)
+      for (let i = 0; i < n; i++) {
+        for (let j = 0; j < n; j++) re[i * n + j] = (2 * Math.sqrt(g[i]! * g[j]!)) / total - (i === j ? 1 : 0)
+      }
+      space.constantItem(sockets, re, new Float64Array(n * n))
+      members.forEach((t, i) => {
+        const port = instanceOf(t).port
+        if (port) space.externalPort[sockets[i]!] = port.index - 1
+        else connect(t, sockets[i]!)
+      })
+    }
+  }
+  return connections
+}
+
+/** Chooses the join order once per topology and records each join as a step over fixed buffers. */
+function recordSteps(space: Workspace, connections: readonly Connection[], options: CompileOptions): Step[] {
+  const { items, socketItem } = space
+  const steps: Step[] = []
+  const sequence = chooseJoinOrder(items.map(item => item.sockets), [...connections], space.nextSocket, options.joinOrder, options.seed)
+  for (const c of sequence) {
+    const { a, b } = connections[c]!
+    const x = socketItem[a]!, y = socketItem[b]!
+    const ix = items[x]!, iy = items[y]!
+    const k = ix.sockets.indexOf(a)
+    if (x === y) {
+      const l = ix.sockets.indexOf(b)
+      const sockets = ix.sockets.filter((_, i) => i !== k && i !== l)
+      const out = space.addItem(sockets, space.acquire(sockets.length), false)
+      steps.push({ kind: LOOP, a: ix.buffer, m: ix.sockets.length, k, b: 0, n: 0, l, out: out.buffer, connection: c })
+      space.release(ix)
+    } else {
+      const l = iy.sockets.indexOf(b)
+      const sockets = [...ix.sockets.filter((_, i) => i !== k), ...iy.sockets.filter((_, i) => i !== l)]
+      const out = space.addItem(sockets, space.acquire(sockets.length), false)
+      steps.push({ kind: MERGE, a: ix.buffer, m: ix.sockets.length, k, b: iy.buffer, n: iy.sockets.length, l, out: out.buffer, connection: c })
+      space.release(ix)
+      space.release(iy)
+    }
+  }
+  return steps
 }
 
 /** Copies one matrix to every frequency slot of a batched buffer. */

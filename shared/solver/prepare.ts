@@ -4,7 +4,7 @@ import { evaluateParams, type ParamValues } from '../network/params'
 import { parseNetworkDocument } from '../network/schema'
 import { checkTopology } from '../network/topology'
 import type { Evaluated, NetworkDocument, Problem } from '../network/types'
-import { evaluateVariables } from '../network/variables'
+import { evaluateVariables, type VariablesOutcome } from '../network/variables'
 import { BLOCK_MODELS, LATER_BLOCK_TYPES } from './blocks/registry'
 import { CompiledNetwork, type CompileBlock } from './compile'
 import type { JoinOrder } from './join-order'
@@ -62,37 +62,8 @@ function prepareAt(input: unknown, options: PrepareOptions, trail: readonly stri
   evaluated.variables = variables.evaluated
   problems.push(...variables.problems)
 
-  let referenceImpedance = 50
-  if (document.referenceImpedance !== undefined) {
-    const outcome = evaluateQuantity(document.referenceImpedance, 'impedance', variables.scope, variables.failed)
-    const error = !outcome.ok ? outcome.error : outcome.value > 0 ? undefined : `must be greater than zero (got ${formatQuantity(outcome.value, 'impedance')})`
-    if (error) {
-      evaluated.settings.referenceImpedance = { error }
-      problems.push({ field: 'referenceImpedance', message: `referenceImpedance: ${error}` })
-    } else if (outcome.ok) {
-      referenceImpedance = outcome.value
-    }
-  }
-  if (!evaluated.settings.referenceImpedance) {
-    evaluated.settings.referenceImpedance = { value: referenceImpedance, unit: 'Ω', display: formatQuantity(referenceImpedance, 'impedance') }
-  }
-
-  let sweep: Partial<SweepSettings> | undefined
-  if (document.sweep) {
-    sweep = { points: document.sweep.points ?? 201, spacing: document.sweep.spacing ?? 'linear' }
-    evaluated.settings['sweep.points'] = { value: sweep.points, display: String(sweep.points) }
-    for (const field of ['start', 'stop'] as const) {
-      const outcome = evaluateQuantity(document.sweep[field], 'frequency', variables.scope, variables.failed)
-      const error = !outcome.ok ? outcome.error : outcome.value >= 0 ? undefined : `must not be negative (got ${formatQuantity(outcome.value, 'frequency')})`
-      if (error) {
-        evaluated.settings[`sweep.${field}`] = { error }
-        problems.push({ field: `sweep.${field}`, message: `sweep.${field}: ${error}` })
-      } else if (outcome.ok) {
-        sweep[field] = outcome.value
-        evaluated.settings[`sweep.${field}`] = { value: outcome.value, unit: 'Hz', display: formatQuantity(outcome.value, 'frequency') }
-      }
-    }
-  }
+  const referenceImpedance = evaluateReference(document, variables, evaluated, problems)
+  const sweep = evaluateSweep(document, variables, evaluated, problems)
 
   const context = (blockId: string): CreateContext => ({
     blockId,
@@ -146,6 +117,42 @@ function prepareAt(input: unknown, options: PrepareOptions, trail: readonly stri
     evaluated,
     network: { document, ports: compiled.ports, impedances: compiled.impedances, blocks: compiled.blockCount, ...(sweep ? { sweep } : {}), compiled },
   }
+}
+
+/** Evaluates `referenceImpedance` (default 50 Ω) for display and use; a bad one is a problem. */
+function evaluateReference(document: NetworkDocument, variables: VariablesOutcome, evaluated: Evaluated, problems: Problem[]): number {
+  let referenceImpedance = 50
+  if (document.referenceImpedance !== undefined) {
+    const outcome = evaluateQuantity(document.referenceImpedance, 'impedance', variables.scope, variables.failed)
+    const error = !outcome.ok ? outcome.error : outcome.value > 0 ? undefined : `must be greater than zero (got ${formatQuantity(outcome.value, 'impedance')})`
+    if (error) {
+      evaluated.settings.referenceImpedance = { error }
+      problems.push({ field: 'referenceImpedance', message: `referenceImpedance: ${error}` })
+      return referenceImpedance
+    }
+    if (outcome.ok) referenceImpedance = outcome.value
+  }
+  evaluated.settings.referenceImpedance = { value: referenceImpedance, unit: 'Ω', display: formatQuantity(referenceImpedance, 'impedance') }
+  return referenceImpedance
+}
+
+/** Evaluates the document's sweep, as far as it goes; the fields it lacks stay absent. */
+function evaluateSweep(document: NetworkDocument, variables: VariablesOutcome, evaluated: Evaluated, problems: Problem[]): Partial<SweepSettings> | undefined {
+  if (!document.sweep) return undefined
+  const sweep: Partial<SweepSettings> = { points: document.sweep.points ?? 201, spacing: document.sweep.spacing ?? 'linear' }
+  evaluated.settings['sweep.points'] = { value: sweep.points, display: String(sweep.points) }
+  for (const field of ['start', 'stop'] as const) {
+    const outcome = evaluateQuantity(document.sweep[field], 'frequency', variables.scope, variables.failed)
+    const error = !outcome.ok ? outcome.error : outcome.value >= 0 ? undefined : `must not be negative (got ${formatQuantity(outcome.value, 'frequency')})`
+    if (error) {
+      evaluated.settings[`sweep.${field}`] = { error }
+      problems.push({ field: `sweep.${field}`, message: `sweep.${field}: ${error}` })
+    } else if (outcome.ok) {
+      sweep[field] = outcome.value
+      evaluated.settings[`sweep.${field}`] = { value: outcome.value, unit: 'Hz', display: formatQuantity(outcome.value, 'frequency') }
+    }
+  }
+  return sweep
 }
 
 function nested(result: PrepareResult, label: string): { ok: true; network: NestedNetwork } | { ok: false; problems: Problem[] } {
