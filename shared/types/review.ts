@@ -184,6 +184,8 @@ export interface AuditEventDto {
   id: number
   action: string
   actor: PersonDto | null
+  /** The member an event is about (role changes, additions, removals), when it names one. */
+  subject: PersonDto | null
   detail: Record<string, unknown>
   createdAt: string
 }

@@ -17,11 +17,13 @@ export default defineEventHandler(async (event): Promise<AuditEventDto[]> => {
     order: [['id', 'DESC']],
     limit: query.limit,
   })
-  const people = await peopleById(events.map(e => e.actorId))
+  const subjectOf = (e: AuditEvent) => (typeof e.detail.userId === 'string' ? e.detail.userId : null)
+  const people = await peopleById(events.flatMap(e => [e.actorId, subjectOf(e)]))
   return events.map(e => ({
     id: Number(e.id),
     action: e.action,
     actor: e.actorId ? people.get(e.actorId) ?? null : null,
+    subject: subjectOf(e) ? people.get(subjectOf(e)!) ?? null : null,
     detail: e.detail,
     createdAt: e.createdAt.toISOString(),
   }))
