@@ -107,7 +107,10 @@ describe('network editor', () => {
     await placeMarkerAt('2.45 GHz')
     expectQuadratureSplit(await readout('S21'), await readout('S31'))
 
+    // Leave the marker field (Esc) before using a canvas key: a key typed into a field belongs to the field.
+    await page.keyboard.press('Escape')
     await page.keyboard.press('0')
+    expect(await page.inputValue('[data-testid="readout-m1-frequency"]')).toBe('2.450 GHz')
     await expect.poll(() => page.getAttribute('[data-testid="save-status"]', 'data-status'), { timeout: 10_000 }).toBe('saved')
     await page.screenshot({ path: `${shots}/canvas.png`, clip: (await page.locator('[data-testid="canvas"]').boundingBox())! })
     await page.locator('[data-testid="results-dock"]').screenshot({ path: `${shots}/response.png` })
