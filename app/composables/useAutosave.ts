@@ -13,7 +13,7 @@ export type SaveStatus = 'saved' | 'unsaved' | 'saving' | 'conflict' | 'invalid'
 
 interface FetchError { statusCode?: number, data?: { data?: { revision?: number, problems?: Array<{ path?: string, message: string }> }, message?: string } }
 
-export function useAutosave(projectId: string, networkId: string, initialRevision: number, options: { delayMs?: number } = {}) {
+export function useAutosave(projectId: string, networkId: string, initialRevision: number, options: { delayMs?: number, paused?: () => boolean } = {}) {
   const store = useEditorStore()
   const delay = options.delayMs ?? 800
   const status = ref<SaveStatus>(store.readOnly ? 'readonly' : 'saved')
@@ -33,6 +33,8 @@ export function useAutosave(projectId: string, networkId: string, initialRevisio
   }
 
   async function save() {
+    // Paused while live co-editing persists the document: two write paths would fight over revisions.
+    if (options.paused?.()) return
     if (store.readOnly || status.value === 'conflict' || inFlight) return
     if (store.version === savedVersion) return
     inFlight = true
@@ -90,6 +92,7 @@ export function useAutosave(projectId: string, networkId: string, initialRevisio
   }
 
   watch(() => store.version, () => {
+    if (options.paused?.()) return
     if (store.readOnly || status.value === 'conflict') return
     if (store.version === savedVersion) return // a fresh load is what is saved already
     status.value = 'unsaved'

@@ -11,7 +11,7 @@
  * sent when it is back (y-websocket's sync exchange). They live in this tab
  * only: a reload while offline loses them.
  */
-import { onBeforeUnmount, ref, shallowRef, watch } from 'vue'
+import { onBeforeUnmount, ref, shallowRef, watch, type InjectionKey, type Ref } from 'vue'
 import * as Y from 'yjs'
 import { WebsocketProvider } from 'y-websocket'
 import type { NetworkDocument } from '~~/shared/network/types'
@@ -20,6 +20,9 @@ import { hasNetwork, NETWORK_ROOT, readNetwork, writeNetwork } from '~~/shared/l
 import { useEditorStore } from '~~/app/stores/editor'
 import type { ChangeOrigin, DocumentSource } from '~~/app/utils/editor/documentSource'
 import { peersFrom, type PresencePeer } from '~~/app/utils/editor/presence'
+
+/** The other people in the network, provided by the page for the canvas's selection outlines. */
+export const LIVE_PEERS: InjectionKey<Readonly<Ref<PresencePeer[]>>> = Symbol('live-peers')
 
 /** Where the live connection stands, as the indicator shows it. */
 export type LiveStatus = 'connecting' | 'live' | 'offline' | 'unavailable' | 'refused'

@@ -111,7 +111,8 @@ describe('network editor', () => {
     await page.keyboard.press('Escape')
     await page.keyboard.press('0')
     expect(await page.inputValue('[data-testid="readout-m1-frequency"]')).toBe('2.450 GHz')
-    await expect.poll(() => page.getAttribute('[data-testid="save-status"]', 'data-status'), { timeout: 10_000 }).toBe('saved')
+    // Live co-editing stores every change on the server as it is made; a live connection means saved.
+    await expect.poll(() => page.getAttribute('[data-testid="live-status"]', 'data-status'), { timeout: 10_000 }).toBe('live')
     await page.screenshot({ path: `${shots}/canvas.png`, clip: (await page.locator('[data-testid="canvas"]').boundingBox())! })
     await page.locator('[data-testid="results-dock"]').screenshot({ path: `${shots}/response.png` })
     await page.click('[data-testid="view-tab-balance"]')

@@ -33,6 +33,8 @@ export interface BlockNodeData {
   /** Plain-words problem reported for this block by the evaluator or solver. */
   problem?: string
   readOnly: boolean
+  /** Other people (live co-editing) who have this block selected: outlined in their colour. */
+  remote?: Array<{ initials: string, colour: string, name: string }>
 }
 
 export interface FlowNode {
