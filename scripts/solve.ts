@@ -40,6 +40,8 @@ function main(): void {
   if (!sweep.ok) fail(sweep.problems)
   const solved = solveNetwork(prepared.network, sweepFrequencies(sweep.sweep))
   if (!solved.ok) fail(solved.problems)
+  // Isolated resonances cut off from every port: the result is complete, but say where.
+  for (const warning of solved.warnings) process.stderr.write(`warning: ${warning.message}\n`)
   const name = prepared.network.document.name
   const output = format === 'json'
     ? `${toJson(solved.result)}\n`

@@ -16,7 +16,7 @@ function solve(request: SolveRequest): { reply: SolveReply, transfer: Transferab
   const r = solved.result
   const result = { ports: r.ports, impedances: [...r.impedances], frequencies: r.frequencies, re: r.re, im: r.im }
   return {
-    reply: { ...base, problems: [], result, solveMs: performance.now() - t0 },
+    reply: { ...base, problems: solved.warnings, result, solveMs: performance.now() - t0 },
     transfer: [r.frequencies.buffer, r.re.buffer, r.im.buffer],
   }
 }

@@ -83,6 +83,7 @@ export class CompiledNetwork implements NestedNetwork {
   private readonly scratch = kernelScratch(CHUNK)
   private readonly single = new Float64Array(1)
   private lastFailure: Problem | undefined
+  private lastFailureSingular = false
 
   constructor(blocks: CompileBlock[], wires: ReadonlyArray<readonly [string, string]>, options: CompileOptions = {}) {
     const layout = terminalLayout(blocks)
@@ -123,6 +124,11 @@ export class CompiledNetwork implements NestedNetwork {
     return this.lastFailure
   }
 
+  /** Whether the last failure was a singular join or a non-finite result (not a block that cannot be evaluated). */
+  failedAsSingular(): boolean {
+    return this.lastFailureSingular
+  }
+
   /**
    * Solves at frequency f and writes the ports×ports S, row-major, into re/im from offset.
    * Returns false (see `failure`) when a join is singular or a block cannot be evaluated.
@@ -155,6 +161,7 @@ export class CompiledNetwork implements NestedNetwork {
         : mergeNetworks(bufRe[a]!, bufIm[a]!, step.m, step.k, bufRe[b]!, bufIm[b]!, step.n, step.l, bufRe[out]!, bufIm[out]!, reciprocal, count, CHUNK, scratch)
       if (failed >= 0) {
         this.lastFailure = this.singular(step.connection, frequencies[start + failed]!)
+        this.lastFailureSingular = true
         return false
       }
     }
@@ -169,6 +176,7 @@ export class CompiledNetwork implements NestedNetwork {
       for (let q = 0; q < count; q++) {
         const frequency = frequencies[start + q]!
         if (!entry.instance.fill(frequency, entry.re, entry.im)) {
+          this.lastFailureSingular = false
           this.lastFailure = entry.instance.failure?.() ?? {
             block: entry.id,
             frequency,
@@ -204,6 +212,7 @@ export class CompiledNetwork implements NestedNetwork {
           // NaN fails every comparison; a block model pushed past its range must not leak it.
           if (!(Math.abs(vR) < Infinity && Math.abs(vI) < Infinity)) {
             const frequency = frequencies[start + q]!
+            this.lastFailureSingular = true
             this.lastFailure = { frequency, message: `the result is not a finite number at ${formatQuantity(frequency, 'frequency')} (S${i + 1}${j + 1})` }
             return false
           }

@@ -58,6 +58,15 @@ describe('solve command', { timeout: 240_000 }, () => {
     expect(json.s[1][2][0]).toEqual([solved.result.re[16 + 8], solved.result.im[16 + 8]])
   })
 
+  it('a sweep through a trapped resonance prints the whole result and one warning on standard error', () => {
+    // The from-lines branch-line at exactly 2·f0 = 4.9 GHz (common practice: a 2λ ring with nulls at the ports).
+    const result = run('solve', [example, '--format', 'json', '--start', '4.8 GHz', '--stop', '5 GHz', '--points', '3'])
+    expect(result.status).toBe(0)
+    expect(JSON.parse(result.stdout).frequencies).toEqual([4.8e9, 4.9e9, 5e9])
+    expect(result.stderr.trim().split('\n')).toHaveLength(1)
+    expect(result.stderr).toMatch(/^warning: .*4\.9 GHz/)
+  })
+
   it('ports of different impedance give Touchstone 2.0 with [Reference]', () => {
     const path = write('unequal.json', {
       format: 'portwright.network', version: 1, sweep: { start: '1 GHz', stop: '2 GHz', points: 2 },
@@ -90,8 +99,9 @@ describe('solve command', { timeout: 240_000 }, () => {
   it('unreadable files, bad JSON, bad options and singular networks also exit 2 without output', async () => {
     const singular = write('singular.json', {
       format: 'portwright.network', version: 1, sweep: { start: '2.45 GHz', stop: '2.45 GHz', points: 1 },
-      blocks: [P(1), { id: 'SA', type: 'load', params: { end: 'short' } }, { id: 'L', type: 'line', params: { impedance: 50, degrees: 180, at: '2.45 GHz' } }, { id: 'SB', type: 'load', params: { end: 'short' } }],
-      wires: [['P1.1', 'SA.1'], ['SA.1', 'L.1'], ['L.2', 'SB.1']],
+      // A 360° ideal link shorted onto itself beside an open end is singular at every frequency.
+      blocks: [P(1), { id: 'T', type: 'line', params: { impedance: 50, degrees: 30, at: '2.45 GHz' } }, { id: 'LOOP', type: 'phase', params: { degrees: 360 } }, { id: 'OPEN', type: 'load', params: { end: 'open' } }],
+      wires: [['P1.1', 'T.1'], ['T.2', 'OPEN.1'], ['OPEN.1', 'LOOP.1'], ['LOOP.1', 'LOOP.2']],
     })
     const cases = [[join(folder, 'missing.json')], [write('broken.json', '{ nope')], [example, '--points', 'many'], [example, '--format', 'xml'], [example, '--start', '3 ohm'], [singular]]
     const results = await Promise.all(cases.map(args => runAsync('solve', args)))

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest'
 import { branchLineHybrid, ringHybrid, wilkinsonDivider } from '../../../shared/examples/index'
 import { findBandwidth } from '../../../shared/rf/index'
-import { sweepFrequencies } from '../../../shared/solver/index'
+import { prepareNetwork, solveNetwork, sweepFrequencies } from '../../../shared/solver/index'
 import { abcdToS } from '../../../shared/solver/math/abcd-to-s'
 import { doc, matrix, maxDiff, port, solveAt, type C } from './helpers'
 
@@ -63,10 +63,20 @@ describe('quadrature hybrid', () => {
     expect(Math.hypot(...m[3]![0]!)).toBeLessThan(1e-12)
   })
 
-  it('at exactly twice f0 the ring of half-wave arms traps a resonance, reported rather than solved', () => {
+  it('at exactly twice f0 the ring of half-wave arms traps a resonance: reported, and the sweep goes on with the limit', () => {
     // Four λ/2 arms form a 2λ ring whose standing wave has voltage nulls at all four ports
     // (common practice): the primer §4 asks for such a resonance to be reported with its frequency.
-    expect(() => solveAt(branchLineHybrid, [2 * F0])).toThrow(/cannot be solved at 4\.9 GHz.*resonance/)
+    const prepared = prepareNetwork(branchLineHybrid)
+    if (!prepared.ok) throw new Error('example must prepare')
+    const solved = solveNetwork(prepared.network, Float64Array.of(2.4e9, 2 * F0, 5e9))
+    if (!solved.ok) throw new Error(solved.problems[0]!.message)
+    expect(solved.warnings).toHaveLength(1)
+    expect(solved.warnings[0]!.frequency).toBe(2 * F0)
+    expect(solved.warnings[0]!.message).toMatch(/4\.9 GHz.*resonance/)
+    // S is continuous through the trapped resonance: the value shown there must equal the
+    // closed-form (even/odd-mode) branch model, which has no trapped mode, at the same frequency.
+    const model = solveAt(single('hybrid90', { model: 'branch', at: 'f0' }, 4), [2 * F0])
+    expect(maxDiff(matrix(solved.result, 1), matrix(model, 0))).toBeLessThan(1e-6)
   })
 
   it('one section has a 20 dB return-loss bandwidth of 10–20 %', () => {
