@@ -213,6 +213,8 @@ describe('reviews, comments and their e-mail', () => {
 
     const listed = await viewer.client.get(`${base}/networks/${networkId}/snapshots`)
     expect(listed.body.find((s: { id: string }) => s.id === snap.id).latestReview).toEqual({ id: reviewId, state: 'sent-back' })
+    // Two threads (the block one and the reopened band one), both open; replies are not threads.
+    expect(listed.body.find((s: { id: string }) => s.id === snap.id).openComments).toBe(2)
   })
 
   it('all reviewers clearing clears the review; a review can be withdrawn while awaiting', async () => {
