@@ -1,6 +1,7 @@
 import { restoreSnapshotSchema } from '../../../../../../shared/schemas/review'
 import { Network, Snapshot } from '../../../../../database/models'
 import type { RestoreResultDto } from '../../../../../../shared/types/review'
+import type { NetworkDocument } from '../../../../../../shared/network/types'
 
 /**
  * Makes a snapshot's document the live network again (owners and editors). Like a save it
@@ -12,7 +13,7 @@ export default defineEventHandler(async (event): Promise<RestoreResultDto> => {
   const body = await readBodyAs(event, restoreSnapshotSchema)
   const { user, project } = await requireProjectRole(event, 'editor')
   const { snapshot, network } = await requireSnapshot(event, project.id)
-  type Outcome = { stale: number | null } | { kept: Snapshot; revision: number }
+  type Outcome = { stale: number | null } | { kept: Snapshot; revision: number; document: NetworkDocument }
   const outcome = await useDatabase().transaction(async (transaction): Promise<Outcome> => {
     const live = await Network.findByPk(network.id, { transaction, lock: transaction.LOCK.UPDATE })
     if (!live || live.revision !== body.revision) return { stale: live?.revision ?? null }
@@ -26,8 +27,9 @@ export default defineEventHandler(async (event): Promise<RestoreResultDto> => {
       createdBy: user.id,
     }, { transaction })
     // The name stays the network's: a snapshot of an older name should not rename it.
-    await live.update({ document: { ...snapshot.document, name: live.document.name ?? live.name }, revision: live.revision + 1, updatedBy: user.id }, { transaction })
-    return { kept, revision: live.revision }
+    const document = { ...snapshot.document, name: live.document.name ?? live.name }
+    await live.update({ document, revision: live.revision + 1, updatedBy: user.id }, { transaction })
+    return { kept, revision: live.revision, document }
   })
   if (!('kept' in outcome)) {
     throw createError({
@@ -36,6 +38,8 @@ export default defineEventHandler(async (event): Promise<RestoreResultDto> => {
       data: { revision: outcome.stale },
     })
   }
+  // Open live editors take the restored document in as an update; without it their next merge would write the old one back.
+  await liveDocumentSaved(network.id, outcome.document, user.id)
   await recordAudit('snapshot.restored', user.id, project.id, {
     snapshotId: snapshot.id, title: snapshot.title, networkId: network.id, revision: outcome.revision, keptAsSnapshotId: outcome.kept.id,
   })

@@ -1,5 +1,6 @@
 import { createSnapshotSchema } from '../../../../../../../shared/schemas/review'
-import { Snapshot } from '../../../../../../database/models'
+import { Network, Snapshot } from '../../../../../../database/models'
+import { mergeLiveState } from '../../../../../../live/store'
 import type { SnapshotDto } from '../../../../../../../shared/types/review'
 
 /**
@@ -10,7 +11,10 @@ import type { SnapshotDto } from '../../../../../../../shared/types/review'
 export default defineEventHandler(async (event): Promise<SnapshotDto> => {
   const body = await readBodyAs(event, createSnapshotSchema)
   const { user, project, role } = await requireProjectRole(event, 'editor')
-  const network = await requireNetwork(event, project.id)
+  const found = await requireNetwork(event, project.id)
+  // Co-editors' last keystrokes wait in the live update log for the next merge; fold them in now so the snapshot holds them.
+  await mergeLiveState(found.id)
+  const network = (await Network.findByPk(found.id))!
   if (body.revision !== undefined && body.revision !== network.revision) {
     throw createError({
       statusCode: 409,
