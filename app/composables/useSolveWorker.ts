@@ -65,7 +65,8 @@ export function useSolveWorker(options: { debounceMs?: number } = {}) {
     busy.value = false
     if (reply.seq !== latest) return
     evaluated.value = reply.evaluated
-    problems.value = reply.problems
+    // An empty list for an empty list would only make everything that lists problems run again.
+    if (reply.problems.length || problems.value.length) problems.value = reply.problems
     solveMs.value = reply.solveMs
     if (reply.result) {
       result.value = reply.result
