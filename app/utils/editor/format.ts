@@ -46,3 +46,22 @@ export function axisScale(max: number): { scale: number, prefix: string } {
   const [scale, prefix] = prefixes.find(([s]) => abs >= s) ?? [1, '']
   return { scale, prefix }
 }
+
+/** Units read as plain numbers on an axis: nobody says "500 mdB" or "1.5 k°". */
+const PLAIN_UNITS = new Set(['dB', '°', ''])
+
+/**
+ * An axis tick label. dB, degrees and unitless values are plain numbers with as
+ * many decimals as the tick spacing `increment` needs ("−0.5 dB", "−90°", "1.5");
+ * other units get SI prefixes ("2.40 GHz", "1.50 ns").
+ */
+export function formatTick(value: number, unit: string, increment: number): string {
+  if (!PLAIN_UNITS.has(unit)) return formatSI(value, unit, 3)
+  let decimals = 0
+  if (Number.isFinite(increment) && increment > 0) {
+    // As many decimals as the spacing itself has (0.25 → 2, 0.5 → 1, 10 → 0).
+    while (decimals < 6 && Math.abs(Math.round(increment * 10 ** decimals) - increment * 10 ** decimals) > 1e-6 * 10 ** decimals) decimals++
+  }
+  const text = signed(value.toFixed(decimals)).replace(/^\u2212(0(\.0+)?)$/, '$1')
+  return unit === '°' ? `${text}°` : `${text} ${unit}`.trim()
+}

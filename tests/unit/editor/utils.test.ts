@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest'
-import { formatDb, formatDegrees, formatFrequency, formatSI } from '../../../app/utils/editor/format'
+import { formatDb, formatDegrees, formatFrequency, formatSI, formatTick } from '../../../app/utils/editor/format'
 import { readParamInput } from '../../../app/utils/editor/paramInput'
 import { importDocument } from '../../../app/utils/editor/importDocument'
 import { applySelectionChanges } from '../../../app/utils/editor/selection'
@@ -90,5 +90,19 @@ describe('canvas model', () => {
     const spot = freeSpot(doc, { x: 0, y: 0 })
     expect(spot).not.toEqual({ x: 0, y: 0 })
     expect(freeSpot(emptyDocument('y'), { x: 40, y: 60 })).toEqual({ x: 40, y: 60 })
+  })
+})
+
+describe('axis ticks', () => {
+  it('writes dB and degrees as plain numbers with the decimals the spacing needs, other units with SI prefixes', () => {
+    // Engineers read "−0.50 dB", never "−500 mdB" (common practice).
+    expect(formatTick(-0.5, 'dB', 0.5)).toBe('\u22120.5 dB')
+    expect(formatTick(-0.25, 'dB', 0.25)).toBe('\u22120.25 dB')
+    expect(formatTick(-80, 'dB', 20)).toBe('\u221280 dB')
+    expect(formatTick(-0, 'dB', 10)).toBe('0 dB')
+    expect(formatTick(90, '°', 30)).toBe('90°')
+    expect(formatTick(1.5, '', 0.5)).toBe('1.5')
+    expect(formatTick(2.4e9, 'Hz', 2e8)).toBe('2.40 GHz')
+    expect(formatTick(1.5e-9, 's', 5e-10)).toBe('1.50 ns')
   })
 })
