@@ -9,6 +9,7 @@ import { computed, markRaw, ref, shallowRef } from 'vue'
 import type { NetworkDocument, Sweep } from '~~/shared/network/types'
 import type { BlockKind, ParamValue } from '~~/app/utils/editor/blockCatalog'
 import type { Quantity } from '~~/app/utils/editor/traces'
+import type { PlotBand } from '~~/app/utils/editor/plotTypes'
 import { GRID } from '~~/app/utils/editor/blockCatalog'
 import {
   addBlock as addBlockOp, connect as connectOp, disconnect, extractFragment, flipBlocks, moveBlocks as moveBlocksOp,
@@ -33,6 +34,8 @@ export interface ResultsSettings {
   markers: Marker[]
   activeMarker: number | null
   balance: { a: string, b: string, targetDb: number, targetDeg: number }
+  /** Bands shaded on the frequency plots: review comments when a snapshot is open; none in the editor. */
+  bands: PlotBand[]
 }
 
 export interface Selection {
@@ -55,6 +58,7 @@ export const useEditorStore = defineStore('editor', () => {
   const results = ref<ResultsSettings>({
     view: 'response', quantity: 'db', traces: [], smithTraces: [], markers: [], activeMarker: null,
     balance: { a: 'S21', b: 'S31', targetDb: 0, targetDeg: 90 },
+    bands: [],
   })
   let markerIds = 0
 

@@ -7,3 +7,11 @@ export interface PlotSeries {
   /** 'y' left axis, 'y2' right axis. */
   scale?: 'y' | 'y2'
 }
+
+/** A frequency band shaded on a plot (a review comment on a snapshot), in Hz. */
+export interface PlotBand {
+  id: string
+  low: number
+  high: number
+  label: string
+}
