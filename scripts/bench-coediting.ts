@@ -12,6 +12,7 @@
  */
 import { readFileSync, rmSync } from 'node:fs'
 import { randomBytes } from 'node:crypto'
+import { loadavg } from 'node:os'
 import { resolve } from 'node:path'
 import pg from 'pg'
 import * as Y from 'yjs'
@@ -104,12 +105,16 @@ async function main(): Promise<void> {
         disableBc: true,
       })
       const seen = new Map<string, unknown>()
+      const own = `c${i}`
       doc.on('update', (_u: Uint8Array, origin: unknown) => {
         if (origin !== provider) return
         const received = performance.now()
-        const vars = readNetwork(doc).variables ?? {}
-        for (const [key, value] of Object.entries(vars)) {
-          if (!key.startsWith('c') || seen.get(key) === value) continue
+        // Straight to the variables' value map (see shared/live/network-ydoc.ts): the receiving side of
+        // the measurement should cost the load generator as little as possible.
+        const vars = ((doc.getMap('network').get('v') as Y.Map<unknown>).get('variables') as Y.Map<unknown>).get('v') as Y.Map<unknown>
+        for (const [key, value] of vars.entries()) {
+          // A client's own variable changed locally; counting it here would time the next remote update instead.
+          if (key === own || !key.startsWith('c') || seen.get(key) === value) continue
           seen.set(key, value)
           const t0 = sentAt.get(String(value))
           if (t0 !== undefined) latencies.push(received - t0)
@@ -150,6 +155,17 @@ async function main(): Promise<void> {
     // The last client out triggers the final merge; give it a moment before reading the counters.
     await new Promise(r => setTimeout(r, 3000))
     const after = await tableCounters(db)
+    // Context for the latency: every update waits for one committed insert before it is sent on.
+    // An ordinary table: inserts into a temporary one write no WAL and so never wait for a flush.
+    await db.query('CREATE TABLE bench_commit_probe (data bytea)')
+    const commits: number[] = []
+    for (let k = 0; k < 200; k++) {
+      const t0 = performance.now()
+      await db.query('INSERT INTO bench_commit_probe VALUES ($1)', [Buffer.alloc(64)])
+      commits.push(performance.now() - t0)
+    }
+    commits.sort((a, b) => a - b)
+    await db.query('DROP TABLE bench_commit_probe')
     await db.end()
 
     latencies.sort((a, b) => a - b)
@@ -162,6 +178,7 @@ async function main(): Promise<void> {
       deliveries: latencies.length,
       deliveriesExpected: expected,
       latencyMs: { p50: +percentile(latencies, 50).toFixed(2), p95: +percentile(latencies, 95).toFixed(2), max: +(latencies.at(-1) ?? NaN).toFixed(2) },
+      commitMs: { p50: +percentile(commits, 50).toFixed(2), p95: +percentile(commits, 95).toFixed(2) },
       serverRssMiB: { start: +rss[0]!.toFixed(1), peak: +Math.max(...rss).toFixed(1), end: +rss.at(-1)!.toFixed(1) },
       databaseRows: {
         updateLogInserted: delta('network_updates', 'inserted'),
@@ -171,6 +188,7 @@ async function main(): Promise<void> {
       },
     }
     console.log(`latency send → other clients: p50 ${result.latencyMs.p50} ms, p95 ${result.latencyMs.p95} ms, max ${result.latencyMs.max} ms (${result.deliveries} of ${expected} deliveries)`)
+    console.log(`one committed insert from this client: p50 ${result.commitMs.p50} ms, p95 ${result.commitMs.p95} ms; load average ${loadavg().map(l => l.toFixed(1)).join(' ')}`)
     console.log(`server memory (RSS): ${result.serverRssMiB.start} MiB at start, ${result.serverRssMiB.peak} MiB peak, ${result.serverRssMiB.end} MiB at end`)
     console.log(`database rows: ${result.databaseRows.updateLogInserted} update-log inserts, ${result.databaseRows.updateLogDeleted} deleted by merges, ${result.databaseRows.liveStateUpdated} state merges, ${result.databaseRows.networksUpdated} JSON document writes`)
     console.log(JSON.stringify(result))
