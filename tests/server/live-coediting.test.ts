@@ -165,6 +165,31 @@ describe('live co-editing', () => {
     expect(merged.name).toBe('Read only')
   })
 
+  it('takes a document saved through the API into the live document instead of losing it at the next merge', async () => {
+    const networkId = await newNetwork('Saved through the API')
+    const live = connect(team.editor, networkId)
+    await synced(live)
+    live.edit(addLoad('LIVE_FIRST', 1))
+    const current = await until('live edit merged into the JSON document', async () => {
+      const s = await storedDocument(networkId)
+      return s.document.blocks.some(b => b.id === 'LIVE_FIRST') ? s : null
+    })
+    const saved = structuredClone(current.document)
+    saved.blocks.push({ id: 'FROM_API', type: 'load', params: { resistance: 75 } })
+    const put = await team.owner.put(`/api/projects/${team.projectId}/networks/${networkId}`, { document: saved, revision: current.revision })
+    expect(put.status, JSON.stringify(put.body)).toBe(200)
+    await until('API save at the live client', () => live.read().blocks.some(b => b.id === 'FROM_API'))
+    expect(ids(live.read())).toEqual(['FROM_API', 'LIVE_FIRST'])
+    live.edit(addLoad('LIVE_AFTER', 2))
+    live.destroy()
+    const merged = await until('merge keeps both', async () => {
+      const s = await storedDocument(networkId)
+      return s.document.blocks.length === 3 ? s : null
+    })
+    expect(ids(merged.document)).toEqual(['FROM_API', 'LIVE_AFTER', 'LIVE_FIRST'])
+    expect(merged.revision).toBeGreaterThan(put.body.revision)
+  })
+
   it('refuses a signed-out upgrade, a foreign Origin and a non-member', async () => {
     const networkId = await newNetwork('Gate')
     const url = `${liveServerUrl(appUrl())}/${networkId}`
