@@ -64,13 +64,13 @@ export function liveClient(baseUrl: string, networkId: string, cookie: string, o
 }
 
 /** Polls until `check` returns true (or a value), failing with `what` after `timeoutMs`. */
-export async function until<T>(what: string, check: () => T | Promise<T>, timeoutMs = 10_000): Promise<T> {
+export async function until<T>(what: string, check: () => T | Promise<T>, timeoutMs = 10_000): Promise<NonNullable<T>> {
   const end = Date.now() + timeoutMs
   let last: unknown
   for (;;) {
     try {
       const value = await check()
-      if (value) return value
+      if (value) return value as NonNullable<T>
     } catch (error) {
       last = error
     }
