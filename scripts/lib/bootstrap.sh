@@ -13,11 +13,20 @@ apt_install() {
 }
 
 ensure_node_modules() {
-  # Reinstall when node_modules is missing or older than the lock file.
-  if [ ! -d node_modules ] || [ package-lock.json -nt node_modules/.package-lock.json ]; then
-    echo "Installing Node dependencies (npm ci)…"
-    npm ci --no-audit --no-fund --loglevel=error
-  fi
+  # Reinstall when node_modules was not installed from this exact lock file. The check and the
+  # install hold one lock, so two starts at once cannot run `npm ci` over each other.
+  mkdir -p .data
+  (
+    flock 9
+    local want have=""
+    want=$(sha256sum package-lock.json | cut -d' ' -f1)
+    [ -f node_modules/.portwright-lock ] && have=$(cat node_modules/.portwright-lock)
+    if [ ! -d node_modules ] || [ "$want" != "$have" ]; then
+      echo "Installing Node dependencies (npm ci)…"
+      npm ci --no-audit --no-fund --loglevel=error
+      echo "$want" > node_modules/.portwright-lock
+    fi
+  ) 9>.data/.npm-install.lock
 }
 
 ensure_postgres() {
