@@ -1,11 +1,14 @@
 /// <reference lib="webworker" />
 // Solves documents off the main thread so the canvas never waits for the sweep.
-import { prepareNetwork, resolveSweep, solveNetwork, sweepFrequencies } from '../../shared/solver'
+import { JoinPlanCache, prepareNetwork, resolveSweep, solveNetwork, sweepFrequencies } from '../../shared/solver'
 import type { SolveReply, SolveRequest } from './protocol'
+
+// Edits mostly change parameter values, not the join structure, so the join-order search is kept across requests.
+const plans = new JoinPlanCache()
 
 function solve(request: SolveRequest): { reply: SolveReply, transfer: Transferable[] } {
   const t0 = performance.now()
-  const prepared = prepareNetwork(request.document)
+  const prepared = prepareNetwork(request.document, { plans })
   const base = { seq: request.seq, evaluated: prepared.evaluated ?? null }
   if (!prepared.ok) return { reply: { ...base, problems: prepared.problems, result: null, solveMs: performance.now() - t0 }, transfer: [] }
   const sweep = resolveSweep(prepared.network.sweep)

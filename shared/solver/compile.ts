@@ -2,7 +2,7 @@ import { formatQuantity } from '../network/format-quantity'
 import type { Problem } from '../network/types'
 import { closeLoop, kernelScratch, mergeNetworks } from './join-kernels'
 import type { JoinOrder } from './join-order'
-import { chooseJoinOrder } from './join-plan'
+import { planJoinOrder, type JoinPlanCache } from './plan-cache'
 import { blocksReachingPorts, groupNets, terminalLayout, type TerminalLayout } from './nets'
 import type { BlockInstance, NestedNetwork } from './types'
 
@@ -13,10 +13,11 @@ export interface CompileBlock {
   instance: BlockInstance
 }
 
-/** Options of the compilation: the join order (tests compare orders) and its seed. */
+/** Options of the compilation: the join order (tests compare orders), its seed, and join orders remembered from earlier compilations. */
 export interface CompileOptions {
   joinOrder?: JoinOrder
   seed?: number
+  plans?: JoinPlanCache
 }
 
 interface Connection {
@@ -71,6 +72,8 @@ export class CompiledNetwork implements NestedNetwork {
   readonly blockCount: number
   /** Number of join steps replayed per frequency. */
   readonly stepCount: number
+  /** Whether the join order came from `plans` instead of a fresh search. */
+  readonly planReused: boolean
 
   private readonly bufRe: Float64Array[] = []
   private readonly bufIm: Float64Array[] = []
@@ -104,7 +107,12 @@ export class CompiledNetwork implements NestedNetwork {
     })
     this.reciprocal = reciprocal
     this.connections = connectNets(blocks, layout, nets.filter(members => kept(layout.blockOf[members[0]!]!)), space)
-    this.steps = recordSteps(space, this.connections, options)
+    const plan = planJoinOrder(
+      { items: space.items.map(item => item.sockets), connections: this.connections, socketCount: space.nextSocket, order: options.joinOrder, seed: options.seed },
+      options.plans,
+    )
+    this.planReused = plan.reused
+    this.steps = recordSteps(space, this.connections, plan.order)
     this.stepCount = this.steps.length
 
     // Where each external port ends up: buffer and position of its final item.
@@ -364,11 +372,10 @@ function connectNets(blocks: readonly CompileBlock[], layout: TerminalLayout, ne
   return connections
 }
 
-/** Chooses the join order once per topology and records each join as a step over fixed buffers. */
-function recordSteps(space: Workspace, connections: readonly Connection[], options: CompileOptions): Step[] {
+/** Records each join of the chosen order as a step over fixed buffers. */
+function recordSteps(space: Workspace, connections: readonly Connection[], sequence: readonly number[]): Step[] {
   const { items, socketItem } = space
   const steps: Step[] = []
-  const sequence = chooseJoinOrder(items.map(item => item.sockets), [...connections], space.nextSocket, options.joinOrder, options.seed)
   for (const c of sequence) {
     const { a, b } = connections[c]!
     const x = socketItem[a]!, y = socketItem[b]!

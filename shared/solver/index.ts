@@ -11,6 +11,7 @@ export { prepareNetwork, type PrepareOptions, type PrepareResult, type PreparedN
 export { solveNetwork, type SolveOutcome, type SolveResult } from './solve'
 export { resolveSweep, sweepFrequencies, MAX_POINTS, type SweepSettings } from './sweep'
 export { renormalize } from './renormalize'
+export { JoinPlanCache } from './plan-cache'
 export { BLOCK_MODELS, LATER_BLOCK_TYPES } from './blocks/registry'
 export type { BlockModel, BlockInstance } from './types'
 export type { JoinOrder } from './join-order'

@@ -8,6 +8,7 @@ import { evaluateVariables, type VariablesOutcome } from '../network/variables'
 import { BLOCK_MODELS, LATER_BLOCK_TYPES } from './blocks/registry'
 import { CompiledNetwork, type CompileBlock } from './compile'
 import type { JoinOrder } from './join-order'
+import type { JoinPlanCache } from './plan-cache'
 import type { SweepSettings } from './sweep'
 import type { CreateContext, NestedNetwork } from './types'
 
@@ -21,6 +22,11 @@ export interface PrepareOptions {
   /** Join order: 'auto' (greedy, the default), 'document' or 'random' (with `seed`); for tests. */
   joinOrder?: JoinOrder
   seed?: number
+  /**
+   * Join orders kept from earlier prepares (subnetworks included): a network whose join
+   * structure is unchanged reuses its order instead of searching again; S is bit-identical.
+   */
+  plans?: JoinPlanCache
 }
 
 /** A document checked, evaluated and compiled, ready to be solved at any frequencies. */
@@ -111,7 +117,7 @@ function prepareAt(input: unknown, options: PrepareOptions, trail: readonly stri
   problems.push(...checkTopology(document, { terminals: id => terminals.get(id), portIndex: id => portIndex.get(id) }))
   if (problems.length) return { ok: false, problems, evaluated }
 
-  const compiled = new CompiledNetwork(compileBlocks, document.wires, { joinOrder: options.joinOrder, seed: options.seed })
+  const compiled = new CompiledNetwork(compileBlocks, document.wires, { joinOrder: options.joinOrder, seed: options.seed, plans: options.plans })
   return {
     ok: true,
     evaluated,
