@@ -8,7 +8,7 @@ import { solveNetwork, type SolveResult } from './solve'
 import { resolveSweep, sweepFrequencies, type SweepSettings } from './sweep'
 
 export { prepareNetwork, type PrepareOptions, type PrepareResult, type PreparedNetwork, type SubnetworkResolver } from './prepare'
-export { solveNetwork, type SolveOutcome, type SolveResult } from './solve'
+export { solveNetwork, type SolveOptions, type SolveOutcome, type SolveResult } from './solve'
 export { resolveSweep, sweepFrequencies, MAX_POINTS, type SweepSettings } from './sweep'
 export { renormalize } from './renormalize'
 export { JoinPlanCache } from './plan-cache'

@@ -17,6 +17,12 @@ export interface SolveResult {
  */
 export type SolveOutcome = { ok: true; result: SolveResult; warnings: Problem[] } | { ok: false; problems: Problem[] }
 
+/** Options of `solveNetwork`. */
+export interface SolveOptions {
+  /** Arrays to write S into (reused when their length fits), so repeated sweeps allocate nothing. @default new arrays */
+  output?: { re: Float64Array; im: Float64Array }
+}
+
 /** Relative frequency step used to approach an isolated singular frequency from both sides. */
 const NUDGE = 1e-7
 
@@ -29,10 +35,11 @@ const NUDGE = 1e-7
  * with the mean of S just above and just below that frequency and a warning naming it. A network
  * that is singular at the neighbouring frequencies too is reported as a problem.
  */
-export function solveNetwork(network: PreparedNetwork, frequencies: Float64Array): SolveOutcome {
+export function solveNetwork(network: PreparedNetwork, frequencies: Float64Array, options: SolveOptions = {}): SolveOutcome {
   const n = network.ports
-  const re = new Float64Array(frequencies.length * n * n)
-  const im = new Float64Array(frequencies.length * n * n)
+  const size = frequencies.length * n * n
+  const re = options.output?.re.length === size ? options.output.re : new Float64Array(size)
+  const im = options.output?.im.length === size ? options.output.im : new Float64Array(size)
   const compiled = network.compiled
   const result = { ports: n, impedances: [...network.impedances], frequencies, re, im }
   if (compiled.solveFrequencies(frequencies, re, im)) return { ok: true, result, warnings: [] }
