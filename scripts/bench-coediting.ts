@@ -193,13 +193,17 @@ async function main(): Promise<void> {
     console.log(`database rows: ${result.databaseRows.updateLogInserted} update-log inserts, ${result.databaseRows.updateLogDeleted} deleted by merges, ${result.databaseRows.liveStateUpdated} state merges, ${result.databaseRows.networksUpdated} JSON document writes`)
     console.log(JSON.stringify(result))
   } finally {
-    for (const p of providers) p.destroy()
+    // The providers' presence timers would keep Node running after the figures are out.
+    for (const p of providers) {
+      p.destroy()
+      p.awareness.destroy()
+    }
     if (server) await stopProcess(server)
     stopCluster(cluster)
   }
 }
 
-main().catch((error) => {
+main().then(() => process.exit(0)).catch((error) => {
   console.error(`Benchmark failed: ${error instanceof Error ? error.stack : error}`)
   process.exit(1)
 })
