@@ -1,7 +1,7 @@
 /** One line on a frequency plot. */
 export interface PlotSeries {
   label: string
-  values: ArrayLike<number>
+  values: ArrayLike<number | null>
   colour: string
   dash?: readonly number[]
   /** 'y' left axis, 'y2' right axis. */
