@@ -14,6 +14,15 @@ const cluster: Cluster = { dataDir: resolve(testRoot, 'postgres'), port: Number(
 const appPort = Number(process.env.PORTWRIGHT_TEST_PORT ?? 3939)
 const resultsFile = resolve(root, 'test-results', process.env.PORTWRIGHT_BUILD_NAME ? `vitest-${process.env.PORTWRIGHT_BUILD_NAME}.json` : 'vitest.json')
 
+/** Whole-project type check (vue-tsc through nuxt), run with the full suite only. */
+function typecheck(): boolean {
+  console.log('Type-checking (nuxt typecheck)…')
+  const result = spawnSync('npx', ['nuxt', 'typecheck'], { cwd: root, stdio: 'inherit' })
+  return result.status === 0
+}
+
+let typecheckResult: boolean | undefined
+
 async function main(): Promise<number> {
   stopCluster(cluster)
   rmSync(testRoot, { recursive: true, force: true })
@@ -52,7 +61,9 @@ async function main(): Promise<number> {
         PORTWRIGHT_TEST_DB_PORT: String(cluster.port),
       },
     })
-    return vitest.status ?? 1
+    // A full run also type-checks; a run narrowed by arguments is for quick iteration.
+    if (process.argv.length <= 2) typecheckResult = typecheck()
+    return typecheckResult === false ? 1 : vitest.status ?? 1
   } finally {
     if (server) await stopProcess(server)
     stopCluster(cluster)
@@ -67,7 +78,10 @@ function printSummary(): void {
   }
   const report = JSON.parse(readFileSync(resultsFile, 'utf8')) as { numPassedTests: number; numFailedTests: number; numPendingTests: number; numTodoTests: number }
   const skipped = report.numPendingTests + report.numTodoTests
-  console.log(`${report.numPassedTests} passed, ${report.numFailedTests} failed${skipped ? `, ${skipped} skipped` : ''}`)
+  // The type check counts as one more check in the closing line.
+  const passed = report.numPassedTests + (typecheckResult === true ? 1 : 0)
+  const failed = report.numFailedTests + (typecheckResult === false ? 1 : 0)
+  console.log(`${passed} passed, ${failed} failed${skipped ? `, ${skipped} skipped` : ''}`)
 }
 
 main()
