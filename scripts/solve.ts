@@ -18,6 +18,9 @@ function toJson(result: SolveResult): string {
   return JSON.stringify({ ports: n, impedances: result.impedances, frequencies: Array.from(result.frequencies), s })
 }
 
+// Exported results travel without the app's footer, so they carry the caution themselves.
+const SAFETY_NOTE = 'Simulated results: verify hardware by measurement. High RF power can injure; follow local exposure and licensing rules.'
+
 function main(): void {
   let parsed
   try {
@@ -45,7 +48,7 @@ function main(): void {
   const name = prepared.network.document.name
   const output = format === 'json'
     ? `${toJson(solved.result)}\n`
-    : writeTouchstone(solved.result, { comments: [`Portwright solve${name ? `: ${name}` : ''}`, `${solved.result.ports} ports, ${solved.result.frequencies.length} frequencies`] })
+    : writeTouchstone(solved.result, { comments: [`Portwright solve${name ? `: ${name}` : ''}`, `${solved.result.ports} ports, ${solved.result.frequencies.length} frequencies`, SAFETY_NOTE] })
   process.stdout.write(output)
 }
 

@@ -33,7 +33,7 @@ describe('solve command', { timeout: 240_000 }, () => {
     expect(result.status).toBe(0)
     expect(result.stderr).toBe('')
     const parsed = readTouchstone(result.stdout, 4)
-    expect(result.stdout).toMatch(/^! Portwright solve: Branch-line quadrature hybrid, 2\.45 GHz\n! 4 ports, 251 frequencies\n# HZ S RI R 50\n/)
+    expect(result.stdout).toMatch(/^! Portwright solve: Branch-line quadrature hybrid, 2\.45 GHz\n! 4 ports, 251 frequencies\n! Simulated results: verify hardware by measurement\. High RF power can injure[^\n]*\n# HZ S RI R 50\n/)
     const solved = solveDocument(branchLineHybrid)
     expect(solved.ok).toBe(true)
     if (!solved.ok) return
