@@ -16,7 +16,7 @@ import * as Y from 'yjs'
 import { WebsocketProvider } from 'y-websocket'
 import type { NetworkDocument } from '~~/shared/network/types'
 import type { NetworkDto } from '~~/shared/types/api'
-import { hasNetwork, NETWORK_ROOT, readNetwork, writeNetwork } from '~~/shared/live/network-ydoc'
+import { createNetworkReader, hasNetwork, NETWORK_ROOT, readNetwork, writeNetwork, writeNetworkChanges } from '~~/shared/live/network-ydoc'
 import { useEditorStore } from '~~/app/stores/editor'
 import type { ChangeOrigin, DocumentSource } from '~~/app/utils/editor/documentSource'
 import { peersFrom, type PresencePeer } from '~~/app/utils/editor/presence'
@@ -26,14 +26,6 @@ export const LIVE_PEERS: InjectionKey<Readonly<Ref<PresencePeer[]>>> = Symbol('l
 
 /** Where the live connection stands, as the indicator shows it. */
 export type LiveStatus = 'connecting' | 'live' | 'offline' | 'unavailable' | 'refused'
-
-function deepFreeze<T>(value: T): T {
-  if (value && typeof value === 'object' && !Object.isFrozen(value)) {
-    Object.freeze(value)
-    for (const v of Object.values(value as object)) deepFreeze(v)
-  }
-  return value
-}
 
 export interface LiveSourceOptions {
   /** Window in which edits with one merge key form one undo step. @default 1000 */
@@ -52,14 +44,17 @@ export function createLiveSource(doc: Y.Doc, options: LiveSourceOptions = {}): D
   // Only transactions with the local origin are tracked: remote edits are never undone here.
   const undoManager = new Y.UndoManager(root, { trackedOrigins: new Set([localOrigin]), captureTimeout: mergeWindow })
   const listeners = new Set<(d: NetworkDocument, origin: ChangeOrigin) => void>()
-  let current = deepFreeze(readNetwork(doc))
+  // Re-reads only what a transaction changed: unchanged blocks keep their identity across snapshots.
+  const reader = createNetworkReader(doc)
+  let current = reader.read()
   let lastMerge: { key: string, at: number } | null = null
 
   // afterTransaction (registered after the undo manager's own) sees the undo stacks already updated.
   const onTransaction = (tr: Y.Transaction) => {
     // The document holds nothing but the network, so any changed type is a change of it.
     if (tr.changed.size === 0) return
-    current = deepFreeze(readNetwork(doc))
+    reader.changed(tr)
+    current = reader.read()
     let origin: ChangeOrigin = 'remote'
     if (tr.origin === localOrigin) origin = 'local'
     else if (tr.origin === replaceOrigin) origin = 'replace'
@@ -79,7 +74,8 @@ export function createLiveSource(doc: Y.Doc, options: LiveSourceOptions = {}): D
       const merging = opts.mergeKey !== undefined && lastMerge?.key === opts.mergeKey && t - lastMerge.at < mergeWindow
       if (!merging) undoManager.stopCapturing()
       lastMerge = opts.mergeKey !== undefined ? { key: opts.mergeKey, at: t } : null
-      doc.transact(() => writeNetwork(doc, draft), localOrigin)
+      const previous = current
+      doc.transact(() => writeNetworkChanges(doc, previous, draft), localOrigin)
       return true
     },
     replace(next, opts = {}) {

@@ -73,6 +73,56 @@ export function readNetwork(doc: Y.Doc): NetworkDocument {
   return readObject(doc.getMap(NETWORK_ROOT)) as unknown as NetworkDocument
 }
 
+function freeze<T>(value: T): T {
+  if (value && typeof value === 'object' && !Object.isFrozen(value)) {
+    Object.freeze(value)
+    for (const v of Object.values(value as object)) freeze(v)
+  }
+  return value
+}
+
+/**
+ * Reads the network again and again, re-reading only the parts that changed:
+ * call `changed(transaction)` after each transaction, then `read()`. The
+ * result is frozen, and the parts that did not change keep their identity from
+ * one read to the next (an edit of one block makes a new block, a new blocks
+ * array and a new root object, nothing else).
+ */
+export function createNetworkReader(doc: Y.Doc): { read: () => NetworkDocument, changed: (tr: Y.Transaction) => void } {
+  const cache = new WeakMap<object, Json>()
+  const root = doc.getMap(NETWORK_ROOT)
+  function read(value: unknown): Json {
+    if (value instanceof Y.Map || value instanceof Y.Array) {
+      const hit = cache.get(value)
+      if (hit !== undefined) return hit
+      let out: Json
+      if (value instanceof Y.Map) {
+        const values = value.get('v') as Y.Map<unknown> | undefined
+        const obj: JsonObject = {}
+        for (const key of keyOrder(value)) obj[key] = read(values!.get(key))
+        out = obj
+      }
+      else out = value.toArray().map(read)
+      Object.freeze(out)
+      cache.set(value, out)
+      return out
+    }
+    return freeze(copyAtom(value))
+  }
+  return {
+    read: () => read(root) as unknown as NetworkDocument,
+    changed(tr) {
+      for (const type of tr.changed.keys()) {
+        let t: unknown = type
+        while (t instanceof Y.AbstractType) {
+          cache.delete(t)
+          t = t._item?.parent
+        }
+      }
+    },
+  }
+}
+
 /** Whether the Yjs document holds a network yet (a new client's document is empty until it syncs). */
 export function hasNetwork(doc: Y.Doc): boolean {
   return doc.getMap(NETWORK_ROOT).has('v')
@@ -243,6 +293,40 @@ function syncArray(arr: Y.Array<unknown>, next: Json[]): void {
 export function writeNetwork(doc: Y.Doc, document: NetworkDocument): void {
   const root = doc.getMap<unknown>(NETWORK_ROOT)
   syncObject(root, JSON.parse(JSON.stringify(document)) as JsonObject)
+}
+
+/**
+ * Like `writeNetwork`, for a document known to hold `previous` (the last read
+ * of it): only the top-level values and array elements that differ between
+ * `previous` and `document` are synced, so a one-parameter edit touches one
+ * block and nothing else is walked. The result is the same as `writeNetwork`.
+ */
+export function writeNetworkChanges(doc: Y.Doc, previous: NetworkDocument, document: NetworkDocument): void {
+  const root = doc.getMap<unknown>(NETWORK_ROOT)
+  const before = previous as unknown as JsonObject
+  const next = JSON.parse(JSON.stringify(document)) as JsonObject
+  const values = root.get('v')
+  const keys = root.get('k')
+  const names = Object.keys(next)
+  const oldNames = Object.keys(before)
+  if (!(values instanceof Y.Map) || !(keys instanceof Y.Array) || names.length !== oldNames.length
+    || names.some((k, i) => k !== oldNames[i]) || keys.length !== names.length) {
+    syncObject(root, next)
+    return
+  }
+  for (const key of names) {
+    const a = before[key]
+    const b = next[key]!
+    const slot = values.get(key)
+    if (Array.isArray(a) && Array.isArray(b) && slot instanceof Y.Array && a.length === b.length && slot.length === b.length) {
+      for (let i = 0; i < b.length; i++) {
+        if (sameJson(a[i], b[i])) continue
+        if (elementKey(a[i]) !== elementKey(b[i])) { syncSlot(values, key, b); break }
+        syncElement(slot, i, b[i]!)
+      }
+    }
+    else if (!sameJson(a, b)) syncSlot(values, key, b)
+  }
 }
 
 /** A new Yjs document holding `document` (tests, and the server's first load of a network). */

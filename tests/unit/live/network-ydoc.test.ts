@@ -9,7 +9,7 @@ import { join } from 'node:path'
 import { describe, expect, it } from 'vitest'
 import * as Y from 'yjs'
 import type { NetworkDocument } from '../../../shared/network/types'
-import { hasNetwork, networkToYDoc, readNetwork, writeNetwork } from '../../../shared/live/network-ydoc'
+import { createNetworkReader, hasNetwork, networkToYDoc, readNetwork, writeNetwork, writeNetworkChanges } from '../../../shared/live/network-ydoc'
 
 const examplesDir = join(process.cwd(), 'shared', 'examples')
 const exampleFiles = readdirSync(examplesDir).filter(f => f.endsWith('.json'))
@@ -140,5 +140,40 @@ describe('Yjs mapping of the network document', () => {
     const before = Y.encodeStateVector(doc)
     doc.transact(() => writeNetwork(doc, readNetwork(doc)))
     expect(Y.encodeStateVector(doc)).toEqual(before)
+  })
+
+  it('a targeted write of one parameter matches a full write, and the reader keeps unchanged parts', () => {
+    const doc = networkToYDoc(example('butler-matrix-4x4.json'))
+    const twin = replicaOf(doc)
+    const reader = createNetworkReader(doc)
+    doc.on('afterTransaction', tr => reader.changed(tr))
+    const before = reader.read()
+    expect(Object.isFrozen(before.blocks[0])).toBe(true)
+    const k = before.blocks.findIndex(b => Object.keys(b.params ?? {}).length > 0)
+    const param = Object.keys(before.blocks[k]!.params)[0]!
+    const next = structuredClone(before) as NetworkDocument
+    next.blocks[k]!.params[param] = 12.5
+    const sv = Y.encodeStateVector(doc)
+    doc.transact(() => writeNetworkChanges(doc, before, next))
+    twin.transact(() => writeNetwork(twin, next))
+    const after = reader.read()
+    expect(JSON.stringify(after)).toBe(JSON.stringify(next))
+    expect(JSON.stringify(readNetwork(doc))).toBe(JSON.stringify(readNetwork(twin)))
+    // Only the edited parameter went into the update.
+    expect(Y.encodeStateAsUpdate(doc, sv).length).toBeLessThan(200)
+    expect(after.blocks[k]).not.toBe(before.blocks[k])
+    for (let i = 0; i < after.blocks.length; i++) if (i !== k) expect(after.blocks[i]).toBe(before.blocks[i])
+    expect(after.wires).toBe(before.wires)
+    // A remote change reaches the reader too.
+    const remote = replicaOf(doc)
+    edit(remote, (d) => { d.name = 'renamed elsewhere' })
+    exchange(doc, remote)
+    expect(reader.read().name).toBe('renamed elsewhere')
+    expect(reader.read().blocks).toBe(after.blocks)
+    // A structural change (removing a block) falls back to the full sync.
+    const fewer = structuredClone(reader.read()) as NetworkDocument
+    fewer.blocks.splice(k, 1)
+    doc.transact(() => writeNetworkChanges(doc, reader.read(), fewer))
+    expect(JSON.stringify(reader.read())).toBe(JSON.stringify(fewer))
   })
 })
