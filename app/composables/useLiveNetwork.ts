@@ -18,7 +18,7 @@ import type { NetworkDocument } from '~~/shared/network/types'
 import type { NetworkDto } from '~~/shared/types/api'
 import { createNetworkReader, hasNetwork, NETWORK_ROOT, readNetwork, writeNetwork, writeNetworkChanges } from '~~/shared/live/network-ydoc'
 import { useEditorStore } from '~~/app/stores/editor'
-import type { ChangeOrigin, DocumentSource } from '~~/app/utils/editor/documentSource'
+import { createMergeTracker, draftOf, type ChangeOrigin, type DocumentSource } from '~~/app/utils/editor/documentSource'
 import { peersFrom, type PresencePeer } from '~~/app/utils/editor/presence'
 
 /** The other people in the network, provided by the page for the canvas's selection outlines. */
@@ -47,7 +47,7 @@ export function createLiveSource(doc: Y.Doc, options: LiveSourceOptions = {}): D
   // Re-reads only what a transaction changed: unchanged blocks keep their identity across snapshots.
   const reader = createNetworkReader(doc)
   let current = reader.read()
-  let lastMerge: { key: string, at: number } | null = null
+  const merges = createMergeTracker(mergeWindow, now)
 
   // afterTransaction (registered after the undo manager's own) sees the undo stacks already updated.
   const onTransaction = (tr: Y.Transaction) => {
@@ -59,7 +59,7 @@ export function createLiveSource(doc: Y.Doc, options: LiveSourceOptions = {}): D
     if (tr.origin === localOrigin) origin = 'local'
     else if (tr.origin === replaceOrigin) origin = 'replace'
     else if (tr.origin === undoManager) origin = undoManager.redoing ? 'redo' : 'undo'
-    if (origin !== 'local') lastMerge = null
+    if (origin !== 'local') merges.reset()
     for (const l of listeners) l(current, origin)
   }
   doc.on('afterTransaction', onTransaction)
@@ -67,20 +67,16 @@ export function createLiveSource(doc: Y.Doc, options: LiveSourceOptions = {}): D
   return {
     snapshot: () => current,
     transact(edit, opts = {}) {
-      const draft = structuredClone(current) as NetworkDocument
-      edit(draft)
-      if (JSON.stringify(draft) === JSON.stringify(current)) return false
-      const t = now()
-      const merging = opts.mergeKey !== undefined && lastMerge?.key === opts.mergeKey && t - lastMerge.at < mergeWindow
-      if (!merging) undoManager.stopCapturing()
-      lastMerge = opts.mergeKey !== undefined ? { key: opts.mergeKey, at: t } : null
+      const draft = draftOf(current, edit)
+      if (!draft) return false
+      if (!merges.continues(opts.mergeKey)) undoManager.stopCapturing()
       const previous = current
       doc.transact(() => writeNetworkChanges(doc, previous, draft), localOrigin)
       return true
     },
     replace(next, opts = {}) {
       undoManager.stopCapturing()
-      lastMerge = null
+      merges.reset()
       doc.transact(() => writeNetwork(doc, next), opts.undoable ? localOrigin : replaceOrigin)
       if (!opts.undoable) undoManager.clear()
     },

@@ -38,6 +38,32 @@ function deepFreeze<T>(value: T): T {
   return value
 }
 
+/** Applies `edit` to a copy of `current`; undefined when the edit changed nothing. */
+export function draftOf(current: NetworkDocument, edit: (draft: NetworkDocument) => void): NetworkDocument | undefined {
+  const draft = structuredClone(current) as NetworkDocument
+  edit(draft)
+  return JSON.stringify(draft) === JSON.stringify(current) ? undefined : draft
+}
+
+/**
+ * Decides whether an edit continues the previous one (same merge key within the window),
+ * so that typing in one field or dragging a slider makes one undo step.
+ */
+export function createMergeTracker(windowMs: number, now: () => number) {
+  let last: { key: string, at: number } | null = null
+  return {
+    /** Records this edit and says whether it merges into the previous one. */
+    continues(key: string | undefined): boolean {
+      const t = now()
+      const merging = key !== undefined && last?.key === key && t - last.at < windowMs
+      last = key !== undefined ? { key, at: t } : null
+      return merging
+    },
+    /** Any other kind of change (undo, redo, replace, remote) ends the run. */
+    reset() { last = null },
+  }
+}
+
 export interface MemorySourceOptions {
   /** Most undo steps kept. @default 200 */
   historyLimit?: number
@@ -56,7 +82,7 @@ export function createMemorySource(initial: NetworkDocument, options: MemorySour
   const undoStack: NetworkDocument[] = []
   const redoStack: NetworkDocument[] = []
   const listeners = new Set<(doc: NetworkDocument, origin: ChangeOrigin) => void>()
-  let lastMerge: { key: string, at: number } | null = null
+  const merges = createMergeTracker(mergeWindow, now)
 
   function emit(origin: ChangeOrigin) {
     for (const l of listeners) l(current, origin)
@@ -69,13 +95,9 @@ export function createMemorySource(initial: NetworkDocument, options: MemorySour
   return {
     snapshot: () => current,
     transact(edit, opts = {}) {
-      const draft = structuredClone(current) as NetworkDocument
-      edit(draft)
-      if (JSON.stringify(draft) === JSON.stringify(current)) return false
-      const t = now()
-      const merging = opts.mergeKey !== undefined && lastMerge?.key === opts.mergeKey && t - lastMerge.at < mergeWindow
-      if (!merging) pushUndo(current)
-      lastMerge = opts.mergeKey !== undefined ? { key: opts.mergeKey, at: t } : null
+      const draft = draftOf(current, edit)
+      if (!draft) return false
+      if (!merges.continues(opts.mergeKey)) pushUndo(current)
       redoStack.length = 0
       current = deepFreeze(draft)
       emit('local')
@@ -85,7 +107,7 @@ export function createMemorySource(initial: NetworkDocument, options: MemorySour
       if (opts.undoable) pushUndo(current)
       else { undoStack.length = 0 }
       redoStack.length = 0
-      lastMerge = null
+      merges.reset()
       current = deepFreeze(structuredClone(doc))
       emit('replace')
     },
@@ -94,7 +116,7 @@ export function createMemorySource(initial: NetworkDocument, options: MemorySour
       if (!previous) return false
       redoStack.push(current)
       current = previous
-      lastMerge = null
+      merges.reset()
       emit('undo')
       return true
     },
@@ -103,7 +125,7 @@ export function createMemorySource(initial: NetworkDocument, options: MemorySour
       if (!next) return false
       undoStack.push(current)
       current = next
-      lastMerge = null
+      merges.reset()
       emit('redo')
       return true
     },
