@@ -1,5 +1,5 @@
 import { resolve } from 'node:path'
-import { ensureCluster, startCluster, stopCluster, ensureDatabase, databaseUrl, isReady, type Cluster } from './lib/postgres'
+import { ensureCluster, startCluster, stopCluster, ensureDatabase, databaseUrl, isReady, reachableDataDir, type Cluster } from './lib/postgres'
 import { prepareDatabase } from './lib/database-setup'
 import { buildIfStale } from './lib/build'
 import { sessionSecret } from './lib/secret'
@@ -10,7 +10,7 @@ const root = resolve(import.meta.dirname, '..')
 const dataRoot = resolve(root, process.env.PORTWRIGHT_DATA_DIR ?? '.data')
 const port = Number(process.env.PORT ?? 3000)
 const host = process.env.HOST ?? '127.0.0.1'
-const cluster: Cluster = { dataDir: resolve(dataRoot, 'postgres'), port: Number(process.env.PORTWRIGHT_DB_PORT ?? 54329) }
+const cluster: Cluster = { dataDir: reachableDataDir(resolve(dataRoot, 'postgres')), port: Number(process.env.PORTWRIGHT_DB_PORT ?? 54329) }
 
 async function main() {
   const secret = sessionSecret(resolve(dataRoot, 'session-secret'))

@@ -2,14 +2,15 @@ import { resolve } from 'node:path'
 import { rmSync, mkdirSync, readFileSync, existsSync } from 'node:fs'
 import { spawnSync } from 'node:child_process'
 import { randomBytes } from 'node:crypto'
-import { ensureCluster, startCluster, stopCluster, ensureDatabase, databaseUrl, type Cluster } from './lib/postgres'
+import { ensureCluster, startCluster, stopCluster, ensureDatabase, databaseUrl, reachableDataDir, type Cluster } from './lib/postgres'
 import { prepareDatabase } from './lib/database-setup'
 import { buildIfStale } from './lib/build'
 import { startServer, stopProcess } from './lib/server-process'
 
 // The test run's own cluster, port and folders: the start command's data is never touched.
 const root = resolve(import.meta.dirname, '..')
-const testRoot = resolve(root, '.data', process.env.PORTWRIGHT_BUILD_NAME ? `test-${process.env.PORTWRIGHT_BUILD_NAME}` : 'test')
+// The test data must be reachable by the postgres user; reachableDataDir moves it when it is not.
+const testRoot = reachableDataDir(resolve(root, '.data', process.env.PORTWRIGHT_BUILD_NAME ? `test-${process.env.PORTWRIGHT_BUILD_NAME}` : 'test'))
 const cluster: Cluster = { dataDir: resolve(testRoot, 'postgres'), port: Number(process.env.PORTWRIGHT_TEST_DB_PORT ?? 54339), unsafeFast: true }
 const appPort = Number(process.env.PORTWRIGHT_TEST_PORT ?? 3939)
 const resultsFile = resolve(root, 'test-results', process.env.PORTWRIGHT_BUILD_NAME ? `vitest-${process.env.PORTWRIGHT_BUILD_NAME}.json` : 'vitest.json')

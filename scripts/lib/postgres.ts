@@ -1,6 +1,6 @@
 import { execFileSync, spawnSync } from 'node:child_process'
 import { existsSync, mkdirSync, writeFileSync, readFileSync, chmodSync, rmSync } from 'node:fs'
-import { randomBytes } from 'node:crypto'
+import { createHash, randomBytes } from 'node:crypto'
 import { dirname, join, resolve } from 'node:path'
 import pg from 'pg'
 
@@ -46,6 +46,27 @@ export function clusterPassword(cluster: Cluster): string {
   }
   return readFileSync(file, 'utf8').trim()
 }
+
+/**
+ * The folder to keep a cluster in: `preferred`, unless the server's user (postgres, when we run
+ * as root) cannot reach it — a checkout under a mode-700 folder, such as one made by mktemp. Then
+ * a folder of its own under /var/tmp/portwright, named after `preferred` so the same checkout
+ * always finds the same data.
+ */
+export function reachableDataDir(preferred: string): string {
+  const dataDir = resolve(preferred)
+  if (!isRoot()) return dataDir
+  mkdirSync(dirname(dataDir), { recursive: true })
+  if (spawnSync('runuser', ['-u', 'postgres', '--', 'test', '-x', dirname(dataDir)]).status === 0) return dataDir
+  const tag = createHash('sha256').update(dataDir).digest('hex').slice(0, 12)
+  const fallback = join('/var/tmp/portwright', `${baseNameOf(dataDir)}-${tag}`)
+  mkdirSync(dirname(fallback), { recursive: true, mode: 0o755 })
+  chmodSync(dirname(fallback), 0o755)
+  console.log(`The postgres user cannot reach ${dirname(dataDir)}; keeping the database in ${fallback} instead.`)
+  return fallback
+}
+
+function baseNameOf(path: string) { return path.split('/').filter(Boolean).slice(-2).join('-') }
 
 /** Creates the cluster if its folder holds none; reuses it otherwise. */
 export function ensureCluster(cluster: Cluster): void {
