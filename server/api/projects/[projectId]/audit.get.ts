@@ -10,8 +10,8 @@ const auditQuery = z.object({
 
 /** The project's audit trail, newest first, paged by `before` (an event id) (owners). */
 export default defineEventHandler(async (event): Promise<AuditEventDto[]> => {
-  const query = queryAs(event, auditQuery)
   const { project } = await requireProjectRole(event, 'owner')
+  const query = queryAs(event, auditQuery)
   const events = await AuditEvent.findAll({
     where: { projectId: project.id, ...(query.before ? { id: { [Op.lt]: query.before } } : {}) },
     order: [['id', 'DESC']],

@@ -6,8 +6,8 @@ import type { CommentDto } from '../../../../../shared/types/review'
  * up). Members newly mentioned by an edit get an e-mail; those mentioned before do not.
  */
 export default defineEventHandler(async (event): Promise<CommentDto> => {
-  const body = await readBodyAs(event, updateCommentSchema)
   const { user, project } = await requireProjectRole(event, 'reviewer')
+  const body = await readBodyAs(event, updateCommentSchema)
   const { comment, snapshot, network } = await requireComment(event, project.id)
   if (body.body !== undefined && comment.authorId !== user.id) {
     throw createError({ statusCode: 403, message: 'Only its author can change the words of a comment.' })

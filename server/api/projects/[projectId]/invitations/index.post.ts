@@ -9,8 +9,8 @@ import type { InvitationDto } from '../../../../../shared/types/review'
  * address is withdrawn, so only the newest link works.
  */
 export default defineEventHandler(async (event): Promise<InvitationDto> => {
-  const body = await readBodyAs(event, inviteSchema)
   const { user, project } = await requireProjectRole(event, 'owner')
+  const body = await readBodyAs(event, inviteSchema)
   const existing = await User.findOne({ where: { email: body.email }, attributes: ['id', 'name'] })
   const member = existing && await Membership.findOne({ where: { projectId: project.id, userId: existing.id } })
   if (member) {

@@ -9,8 +9,8 @@ import type { ReviewDto, ReviewState } from '../../../../../../shared/types/revi
  * cleared. The requester and the other reviewers get an e-mail.
  */
 export default defineEventHandler(async (event): Promise<ReviewDto> => {
-  const body = await readBodyAs(event, decideReviewSchema)
   const { user, project } = await requireProjectRole(event, 'reviewer')
+  const body = await readBodyAs(event, decideReviewSchema)
   const found = await requireReview(event, project.id)
   const review = await useDatabase().transaction(async (transaction) => {
     const locked = (await Review.findByPk(found.id, { transaction, lock: transaction.LOCK.UPDATE }))!

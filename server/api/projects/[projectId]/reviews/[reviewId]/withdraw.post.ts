@@ -4,8 +4,8 @@ import type { ReviewDto } from '../../../../../../shared/types/review'
 
 /** Withdraws a review that is still awaiting decisions (owners and editors). */
 export default defineEventHandler(async (event): Promise<ReviewDto> => {
-  const body = await readBodyAs(event, withdrawReviewSchema)
   const { user, project } = await requireProjectRole(event, 'editor')
+  const body = await readBodyAs(event, withdrawReviewSchema)
   const found = await requireReview(event, project.id)
   const review = await useDatabase().transaction(async (transaction) => {
     const locked = (await Review.findByPk(found.id, { transaction, lock: transaction.LOCK.UPDATE }))!

@@ -10,8 +10,8 @@ const when = (date: Date) => date.toISOString().slice(0, 16).replace('T', ' ')
  * live network (after): the change table and both documents, for the overlaid plots.
  */
 export default defineEventHandler(async (event): Promise<CompareDto> => {
-  const query = queryAs(event, compareQuerySchema)
   const { project } = await requireProjectRole(event, 'viewer')
+  const query = queryAs(event, compareQuerySchema)
   const { snapshot, network } = await requireSnapshot(event, project.id)
   const before: CompareSideDto = { kind: 'snapshot', id: snapshot.id, label: `${snapshot.title} (${when(snapshot.createdAt)})`, document: snapshot.document }
   let after: CompareSideDto

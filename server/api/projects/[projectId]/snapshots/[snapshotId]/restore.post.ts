@@ -10,8 +10,8 @@ import type { NetworkDocument } from '../../../../../../shared/network/types'
  * by restoring that one.
  */
 export default defineEventHandler(async (event): Promise<RestoreResultDto> => {
-  const body = await readBodyAs(event, restoreSnapshotSchema)
   const { user, project } = await requireProjectRole(event, 'editor')
+  const body = await readBodyAs(event, restoreSnapshotSchema)
   const { snapshot, network } = await requireSnapshot(event, project.id)
   type Outcome = { stale: number | null } | { kept: Snapshot; revision: number; document: NetworkDocument }
   const outcome = await useDatabase().transaction(async (transaction): Promise<Outcome> => {

@@ -9,8 +9,8 @@ import type { SnapshotDto } from '../../../../../../../shared/types/review'
  * nobody freezes a version other than the one on their screen.
  */
 export default defineEventHandler(async (event): Promise<SnapshotDto> => {
-  const body = await readBodyAs(event, createSnapshotSchema)
   const { user, project, role } = await requireProjectRole(event, 'editor')
+  const body = await readBodyAs(event, createSnapshotSchema)
   const found = await requireNetwork(event, project.id)
   // Co-editors' last keystrokes wait in the live update log for the next merge; fold them in now so the snapshot holds them.
   await mergeLiveState(found.id)

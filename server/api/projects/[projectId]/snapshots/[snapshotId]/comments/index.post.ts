@@ -8,8 +8,8 @@ import type { CommentAnchor, CommentDto } from '../../../../../../../shared/type
  * Mentioned members get an e-mail.
  */
 export default defineEventHandler(async (event): Promise<CommentDto> => {
-  const body = await readBodyAs(event, createCommentSchema)
   const { user, project } = await requireProjectRole(event, 'reviewer')
+  const body = await readBodyAs(event, createCommentSchema)
   const { snapshot, network } = await requireSnapshot(event, project.id)
   let anchor: CommentAnchor = body.anchor
   if (body.parentId) {

@@ -10,8 +10,8 @@ import type { ReviewDto, SnapshotSummary } from '../../../../../../../shared/typ
  * reviewer role or higher; each gets an e-mail with the snapshot's key figures.
  */
 export default defineEventHandler(async (event): Promise<ReviewDto> => {
-  const body = await readBodyAs(event, requestReviewSchema)
   const { user, project } = await requireProjectRole(event, 'editor')
+  const body = await readBodyAs(event, requestReviewSchema)
   const { snapshot, network } = await requireSnapshot(event, project.id)
   const reviewerIds = [...new Set(body.reviewerIds)]
   if (reviewerIds.includes(user.id)) {
