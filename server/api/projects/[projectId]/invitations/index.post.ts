@@ -22,9 +22,11 @@ export default defineEventHandler(async (event): Promise<InvitationDto> => {
       { revokedAt: new Date() },
       { where: { projectId: project.id, email: body.email, acceptedAt: null, revokedAt: null }, transaction },
     )
+    // One clock reading for both times, so the link lives exactly the stated seven days.
+    const sentAt = new Date()
     return Invitation.create({
       projectId: project.id, email: body.email, role: body.role, tokenHash: hash, invitedBy: user.id,
-      expiresAt: new Date(Date.now() + INVITATION_LIFETIME_MS),
+      createdAt: sentAt, expiresAt: new Date(sentAt.getTime() + INVITATION_LIFETIME_MS),
     }, { transaction })
   })
   await recordAudit('invitation.sent', user.id, project.id, { invitationId: invitation.id, email: body.email, role: body.role })
