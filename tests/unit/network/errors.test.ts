@@ -64,7 +64,7 @@ describe('value errors name the block, the parameter and the reason', () => {
   })
 
   it('functions that reach beyond arithmetic are refused', () => {
-    expect(messages(base([p1, line({ impedance: 'evaluate("50")', degrees: 90, at: 'f0' })], [['P1.1', 'TA.1']]))[0]).toMatch(/^block TA \(line\), impedance: .*function evaluate is not available/)
+    expect(messages(base([p1, line({ impedance: 'evaluate("50")', degrees: 90, at: 'f0' })], [['P1.1', 'TA.1']]))[0]).toMatch(/^block TA \(line\), impedance: .*uses the function evaluate, which is not available/)
   })
 })
 
