@@ -12,11 +12,14 @@ import * as awarenessProtocol from 'y-protocols/awareness'
 import * as encoding from 'lib0/encoding'
 import * as decoding from 'lib0/decoding'
 import { NETWORK_ROOT } from '../../shared/live/network-ydoc'
+import { checkUpdateOn } from '../../shared/live/strict-read'
 import { appendUpdate, loadLiveState, mergeLiveState, publishPresence, readUpdate } from './store'
 
 const MESSAGE_SYNC = 0
 const MESSAGE_AWARENESS = 1
 const MESSAGE_QUERY_AWARENESS = 3
+/** Largest presence state of one client, as JSON characters (a cursor, a selection and a name fit easily). */
+const MAX_PRESENCE_CHARS = 8 * 1024
 
 /**
  * Close codes the browser composable understands. y-websocket's client gives up
@@ -174,6 +177,12 @@ export class LiveRoom {
     }
     // A client with nothing new answers sync step 1 with an empty update: nothing to log.
     if (decoded.structs.length === 0 && decoded.ds.clients.size === 0) return
+    // Tried on a scratch copy first: an update that would leave a document outside the contract is never logged or sent on.
+    const checked = checkUpdateOn(this.doc, update)
+    if (!checked.ok) {
+      this.refuse(peer, CLOSE.badUpdate, `update refused: ${checked.reason}`)
+      return
+    }
     const id = await appendUpdate(this.networkId, update, peer.userId, this.options.instanceId)
     this.stats.accepted++
     this.applied.add(id)
@@ -206,7 +215,16 @@ export class LiveRoom {
       const owner = [...this.controlled].find(([, ids]) => ids.has(clientId))?.[0]
       if (owner && owner !== peer) continue
       if (clientId === this.doc.clientID) continue
-      let state = JSON.parse(json) as Record<string, unknown> | null
+      // One presence per connection, of bounded size: nobody fills the room with states.
+      if (mine.size && !mine.has(clientId)) continue
+      if (json.length > MAX_PRESENCE_CHARS) continue
+      let state: Record<string, unknown> | null
+      try {
+        state = JSON.parse(json) as Record<string, unknown> | null
+      } catch {
+        continue
+      }
+      if (state !== null && (typeof state !== 'object' || Array.isArray(state))) continue
       if (state === null) mine.delete(clientId)
       else {
         mine.add(clientId)

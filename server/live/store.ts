@@ -6,8 +6,8 @@
  */
 import { QueryTypes, type Transaction } from 'sequelize'
 import * as Y from 'yjs'
-import { networkToYDoc, readNetwork, writeNetwork } from '../../shared/live/network-ydoc'
-import { parseNetworkDocument } from '../../shared/network/schema'
+import { networkToYDoc, writeNetwork } from '../../shared/live/network-ydoc'
+import { readNetworkStrict } from '../../shared/live/strict-read'
 import type { NetworkDocument } from '../../shared/network/types'
 import { useDatabase } from '../utils/database'
 
@@ -56,11 +56,11 @@ export async function loadLiveState(networkId: string): Promise<{ state: Uint8Ar
  * Appends an accepted update and announces its id to every instance, in one
  * statement: the notification goes out when the row is committed, never before.
  */
-export async function appendUpdate(networkId: string, data: Uint8Array, userId: string | null, instanceId: string): Promise<string> {
+export async function appendUpdate(networkId: string, data: Uint8Array, userId: string | null, instanceId: string, transaction?: Transaction): Promise<string> {
   const rows = await useDatabase().query<{ id: string }>(
     `WITH stored AS (INSERT INTO network_updates (network_id, data, user_id) VALUES ($1, $2, $3) RETURNING id)
      SELECT id, pg_notify('${UPDATE_CHANNEL}', $4 || ' ' || id || ' ' || $5) FROM stored`,
-    { bind: [networkId, Buffer.from(data), userId, networkId, instanceId], type: QueryTypes.SELECT },
+    { bind: [networkId, Buffer.from(data), userId, networkId, instanceId], type: QueryTypes.SELECT, transaction },
   )
   return String(rows[0]!.id)
 }
@@ -96,18 +96,19 @@ export async function mergeLiveState(networkId: string): Promise<MergeResult> {
     const doc = new Y.Doc()
     Y.applyUpdate(doc, bytes(states[0]!.state))
     for (const u of updates) Y.applyUpdate(doc, u.data)
-    const document = readNetwork(doc)
-    const parsed = parseNetworkDocument(document)
+    const parsed = readNetworkStrict(doc)
+    if (!parsed.ok) {
+      // Nothing is folded or deleted: the log keeps every update and the JSON document its last valid version.
+      doc.destroy()
+      console.warn(`[live] network ${networkId}: merged state is not a valid document (${parsed.reason}); the log and the JSON document are kept as they are`)
+      return { merged: 0, revision: null, invalid: true }
+    }
     if (updates.length) {
       // Re-encoding from a document (not Y.mergeUpdates) drops the content of deleted items, so the state does not grow with history.
       await db.query('UPDATE network_live_states SET state = $2, merged_at = now() WHERE network_id = $1', { bind: [networkId, Buffer.from(Y.encodeStateAsUpdate(doc))], transaction })
       await db.query('DELETE FROM network_updates WHERE id = ANY($1::bigint[])', { bind: [updates.map(u => u.id)], transaction })
     }
     doc.destroy()
-    if (!parsed.ok) {
-      console.warn(`[live] network ${networkId}: merged state is not a valid document (${parsed.problems[0]?.message}); the JSON document keeps its last valid version`)
-      return { merged: updates.length, revision: null, invalid: true }
-    }
     const lastAuthor = [...updates].reverse().find(u => u.userId)?.userId ?? null
     const changed = await db.query<{ revision: number }>(
       `UPDATE networks SET document = $2::jsonb, name = COALESCE(NULLIF($3, ''), name), revision = revision + 1,
@@ -125,20 +126,20 @@ export async function mergeLiveState(networkId: string): Promise<MergeResult> {
  * other, so live clients take it in instead of overwriting it. Does nothing for
  * a network that has never been opened live.
  */
-export async function applyDocumentToLiveState(networkId: string, document: NetworkDocument, userId: string | null, instanceId: string): Promise<boolean> {
+export async function applyDocumentToLiveState(networkId: string, document: NetworkDocument, userId: string | null, instanceId: string, transaction?: Transaction): Promise<boolean> {
   const db = useDatabase()
-  const states = await db.query<{ state: Buffer }>('SELECT state FROM network_live_states WHERE network_id = $1', { bind: [networkId], type: QueryTypes.SELECT })
+  const states = await db.query<{ state: Buffer }>('SELECT state FROM network_live_states WHERE network_id = $1', { bind: [networkId], type: QueryTypes.SELECT, transaction })
   if (!states.length) return false
   const doc = new Y.Doc()
   Y.applyUpdate(doc, bytes(states[0]!.state))
-  for (const u of await pendingUpdates(networkId)) Y.applyUpdate(doc, u.data)
+  for (const u of await pendingUpdates(networkId, transaction)) Y.applyUpdate(doc, u.data)
   const before = Y.encodeStateVector(doc)
   doc.transact(() => writeNetwork(doc, document))
   const diff = Y.encodeStateAsUpdate(doc, before)
   doc.destroy()
   // An update with no new items and no deletions is two zero bytes: nothing to log.
   if (diff.length <= 2) return false
-  await appendUpdate(networkId, diff, userId, instanceId)
+  await appendUpdate(networkId, diff, userId, instanceId, transaction)
   return true
 }
 

@@ -1,5 +1,8 @@
 import { z } from 'zod'
+import { DOCUMENT_LIMITS as LIMITS } from './limits'
 import type { NetworkDocument, Problem } from './types'
+
+const most = (n: number) => n.toLocaleString('en-GB')
 
 const paramValue = z.union(
   [z.number(), z.string().max(500, 'expression is too long (500 characters at most)')],
@@ -16,20 +19,23 @@ export const blockLayoutSchema = z.looseObject({
 
 /** One block: id, type name and parameters; the type itself is checked against the registry later. */
 export const blockSpecSchema = z.looseObject({
-  id: z.string().min(1, 'block id must not be empty'),
-  type: z.string().min(1, 'block type must not be empty'),
-  params: z.record(z.string(), paramValue).default({}),
+  id: z.string().min(1, 'block id must not be empty').max(LIMITS.blockIdLength, `a block id may have at most ${LIMITS.blockIdLength} characters`),
+  type: z.string().min(1, 'block type must not be empty').max(40, 'block type is too long (40 characters at most)'),
+  params: z.record(z.string().max(40, 'a parameter name may have at most 40 characters'), paramValue).default({})
+    .refine(p => Object.keys(p).length <= LIMITS.paramsPerBlock, `a block may have at most ${LIMITS.paramsPerBlock} parameters`),
   layout: blockLayoutSchema.optional(),
 })
 
 /** A wire: two terminals written BLOCK.N. */
-export const wireSchema = z.tuple([z.string(), z.string()], { error: 'a wire must be a pair of terminals such as ["A.1", "B.2"]' })
+const terminal = z.string().max(LIMITS.terminalLength, `a terminal may have at most ${LIMITS.terminalLength} characters`)
+export const wireSchema = z.tuple([terminal, terminal], { error: 'a wire must be a pair of terminals such as ["A.1", "B.2"]' })
 
 /** Sweep as written; values are evaluated later so expressions are allowed. */
 export const sweepSchema = z.looseObject({
   start: paramValue,
   stop: paramValue,
-  points: z.number().int('points must be a whole number').min(1, 'points must be at least 1').optional(),
+  points: z.number().int('points must be a whole number').min(1, 'points must be at least 1')
+    .max(LIMITS.sweepPoints, `a sweep may have at most ${most(LIMITS.sweepPoints)} points`).optional(),
   spacing: z.enum(['linear', 'log']).optional(),
 })
 
@@ -51,13 +57,15 @@ export const networkDocumentSchema = z.looseObject(
   {
     format: z.literal('portwright.network'),
     version: z.literal(1),
-    name: z.string().optional(),
+    name: z.string().max(LIMITS.nameLength, `a network name may have at most ${LIMITS.nameLength} characters`).optional(),
     referenceImpedance: paramValue.optional(),
-    variables: z.record(z.string(), paramValue).optional(),
+    variables: z.record(z.string().max(LIMITS.variableNameLength, `a variable name may have at most ${LIMITS.variableNameLength} characters`), paramValue)
+      .refine(v => Object.keys(v).length <= LIMITS.variables, `a network may have at most ${LIMITS.variables} variables`).optional(),
     sweep: sweepSchema.optional(),
-    substrates: z.record(z.string(), substrateSchema).optional(),
-    blocks: z.array(blockSpecSchema),
-    wires: z.array(wireSchema),
+    substrates: z.record(z.string().max(LIMITS.variableNameLength, `a substrate name may have at most ${LIMITS.variableNameLength} characters`), substrateSchema)
+      .refine(v => Object.keys(v).length <= LIMITS.substrates, `a network may have at most ${LIMITS.substrates} substrates`).optional(),
+    blocks: z.array(blockSpecSchema).max(LIMITS.blocks, `a network may have at most ${most(LIMITS.blocks)} blocks`),
+    wires: z.array(wireSchema).max(LIMITS.wires, `a network may have at most ${most(LIMITS.wires)} wires`),
   },
   { error: (issue) => (issue.input === null || typeof issue.input !== 'object' ? 'a network document must be a JSON object' : undefined) },
 )

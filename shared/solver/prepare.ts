@@ -1,3 +1,4 @@
+import { DOCUMENT_LIMITS } from '../network/limits'
 import { evaluateQuantity } from '../network/expression'
 import { formatQuantity } from '../network/format-quantity'
 import { evaluateParams, type ParamValues } from '../network/params'
@@ -46,7 +47,10 @@ export type PrepareResult =
   | { ok: true; network: PreparedNetwork; evaluated: Evaluated }
   | { ok: false; problems: Problem[]; evaluated: Evaluated }
 
-const MAX_DEPTH = 16
+const MAX_DEPTH = DOCUMENT_LIMITS.subnetworkDepth
+
+/** Blocks still allowed in one prepare, subnetwork uses expanded: shared by a document and everything it nests. */
+interface ExpansionBudget { remaining: number }
 
 /**
  * Checks a network document against the contract, evaluates every expression, checks
@@ -54,14 +58,20 @@ const MAX_DEPTH = 16
  * problem names the block, the field and the reason.
  */
 export function prepareNetwork(input: unknown, options: PrepareOptions = {}): PrepareResult {
-  return prepareAt(input, options, [])
+  return prepareAt(input, options, [], { remaining: DOCUMENT_LIMITS.expandedBlocks })
 }
 
-function prepareAt(input: unknown, options: PrepareOptions, trail: readonly string[]): PrepareResult {
+function prepareAt(input: unknown, options: PrepareOptions, trail: readonly string[], budget: ExpansionBudget): PrepareResult {
   const evaluated: Evaluated = { variables: {}, blocks: {}, settings: {} }
   const parsed = parseNetworkDocument(input)
   if (!parsed.ok) return { ok: false, problems: parsed.problems, evaluated }
   const document = parsed.document
+  // Each use of a subnetwork counts its blocks again, so a chain of networks that each use the next several times stops here.
+  budget.remaining -= document.blocks.length
+  if (budget.remaining < 0) {
+    const where = trail.length ? ` (reached inside ${trail.map(r => `"${r}"`).join(' → ')})` : ''
+    return { ok: false, problems: [{ message: `the network with its subnetworks expanded has more than ${DOCUMENT_LIMITS.expandedBlocks.toLocaleString('en-GB')} blocks${where}` }], evaluated }
+  }
   const problems: Problem[] = []
 
   const variables = evaluateVariables(document.variables)
@@ -74,8 +84,8 @@ function prepareAt(input: unknown, options: PrepareOptions, trail: readonly stri
   const context = (blockId: string): CreateContext => ({
     blockId,
     referenceImpedance,
-    buildNetwork: (doc, label) => nested(prepareAt(doc, { ...options, joinOrder: 'auto' }, trail), label),
-    resolveNetwork: ref => resolve(ref, options, trail),
+    buildNetwork: (doc, label) => nested(prepareAt(doc, { ...options, joinOrder: 'auto' }, trail, budget), label),
+    resolveNetwork: ref => resolve(ref, options, trail, budget),
   })
 
   const compileBlocks: CompileBlock[] = []
@@ -166,7 +176,7 @@ function nested(result: PrepareResult, label: string): { ok: true; network: Nest
   return { ok: false, problems: result.problems.map(p => ({ message: `in ${label}: ${p.message}` })) }
 }
 
-function resolve(ref: string, options: PrepareOptions, trail: readonly string[]): { ok: true; network: NestedNetwork } | { ok: false; problems: Problem[] } {
+function resolve(ref: string, options: PrepareOptions, trail: readonly string[], budget: ExpansionBudget): { ok: true; network: NestedNetwork } | { ok: false; problems: Problem[] } {
   if (trail.includes(ref)) return { ok: false, problems: [{ message: `network "${ref}" contains itself: ${[...trail, ref].join(' → ')}` }] }
   if (trail.length >= MAX_DEPTH) return { ok: false, problems: [{ message: `subnetworks are nested more than ${MAX_DEPTH} deep at "${ref}"` }] }
   if (!options.resolveSubnetwork) return { ok: false, problems: [{ message: `network "${ref}" cannot be loaded here (no subnetwork loader was given)` }] }
@@ -177,5 +187,5 @@ function resolve(ref: string, options: PrepareOptions, trail: readonly string[])
     return { ok: false, problems: [{ message: `network "${ref}" could not be loaded: ${(error as Error).message}` }] }
   }
   if (document === undefined || document === null) return { ok: false, problems: [{ message: `network "${ref}" was not found` }] }
-  return nested(prepareAt(document, options, [...trail, ref]), `network "${ref}"`)
+  return nested(prepareAt(document, options, [...trail, ref], budget), `network "${ref}"`)
 }

@@ -10,6 +10,14 @@ import { useLiveHub } from '../../../live/hub'
 import type { LivePeer } from '../../../live/room'
 
 const livePeers = new WeakMap<Peer, LivePeer>()
+/** Unsent bytes past which a peer counts as too slow to keep (4508, a "try again" code: the client reconnects and syncs afresh). */
+const SLOW_PEER_BYTES = 16 * 1024 * 1024
+
+/** Largest websocket message accepted: the update limit plus room for the message's framing. */
+function maxMessageBytes(): number {
+  const configured = Number(process.env.PORTWRIGHT_LIVE_MAX_UPDATE_BYTES)
+  return (Number.isFinite(configured) && configured > 0 ? configured : 1024 * 1024) + 64
+}
 
 function toLivePeer(peer: Peer, admission: LiveAdmission): LivePeer {
   return {
@@ -18,7 +26,15 @@ function toLivePeer(peer: Peer, admission: LiveAdmission): LivePeer {
     name: admission.name,
     role: admission.role,
     sessionVersion: admission.sessionVersion,
-    send: (data) => { peer.send(data) },
+    send: (data) => {
+      // A peer that does not read what it is sent is dropped before its backlog eats the server's memory.
+      const socket = (peer as unknown as { websocket?: { bufferedAmount?: number } }).websocket
+      if ((socket?.bufferedAmount ?? 0) > SLOW_PEER_BYTES) {
+        peer.close(4508, 'connection too slow')
+        return
+      }
+      peer.send(data)
+    },
     close: (code, reason) => { peer.close(code, reason) },
   }
 }
@@ -44,7 +60,15 @@ export default defineWebSocketHandler({
   },
   message(peer, message) {
     const live = livePeers.get(peer)
-    if (live) useLiveHub().receive(live, message.uint8Array())
+    if (!live) return
+    const data = message.uint8Array()
+    // Bigger than any update the room accepts plus its framing: refused before it is decoded.
+    if (data.length > maxMessageBytes()) {
+      console.warn(`[live] message of ${data.length} bytes from user ${live.userId} refused`)
+      peer.close(4413, 'message too large')
+      return
+    }
+    useLiveHub().receive(live, data)
   },
   async close(peer) {
     const live = livePeers.get(peer)

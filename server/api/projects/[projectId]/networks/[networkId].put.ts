@@ -10,11 +10,16 @@ export default defineEventHandler(async (event) => {
   const existing = await requireNetwork(event, project.id)
   const body = await readBodyAs(event, updateNetworkSchema)
   const document = requireValidDocument(body.document)
-  // One conditional UPDATE: the revision check and the write cannot be split by another writer.
-  const [count, rows] = await Network.update(
-    { document, name: document.name || existing.name, revision: body.revision + 1, updatedBy: user.id },
-    { where: { id: existing.id, revision: body.revision }, returning: true },
-  )
+  // One conditional UPDATE: the revision check and the write cannot be split by another writer. The live log's
+  // entry for the save (open editors take it in instead of overwriting it later) commits with it or not at all.
+  const [count, rows] = await useDatabase().transaction(async (transaction) => {
+    const result = await Network.update(
+      { document, name: document.name || existing.name, revision: body.revision + 1, updatedBy: user.id },
+      { where: { id: existing.id, revision: body.revision }, returning: true, transaction },
+    )
+    if (result[0] > 0) await liveDocumentSaved(existing.id, document, user.id, transaction)
+    return result
+  })
   if (count === 0) {
     const current = await Network.findByPk(existing.id)
     throw createError({
@@ -23,7 +28,5 @@ export default defineEventHandler(async (event) => {
       data: { revision: current?.revision },
     })
   }
-  // Open live editors take the saved document in as an update instead of overwriting it later.
-  await liveDocumentSaved(existing.id, document, user.id)
   return toNetworkDto(rows[0]!, role)
 })

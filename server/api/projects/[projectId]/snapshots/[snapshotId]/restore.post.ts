@@ -13,6 +13,9 @@ export default defineEventHandler(async (event): Promise<RestoreResultDto> => {
   const { user, project } = await requireProjectRole(event, 'editor')
   const body = await readBodyAs(event, restoreSnapshotSchema)
   const { snapshot, network } = await requireSnapshot(event, project.id)
+  // Co-editors' latest changes wait in the live log: fold them in first, so the revision check and the copy kept
+  // of what is replaced see them, and so the restored document is not merged over by older live work.
+  await requireMergedLiveState(network.id)
   type Outcome = { stale: number | null } | { kept: Snapshot; revision: number; document: NetworkDocument }
   const outcome = await useDatabase().transaction(async (transaction): Promise<Outcome> => {
     const live = await Network.findByPk(network.id, { transaction, lock: transaction.LOCK.UPDATE })
@@ -29,6 +32,8 @@ export default defineEventHandler(async (event): Promise<RestoreResultDto> => {
     // The name stays the network's: a snapshot of an older name should not rename it.
     const document = { ...snapshot.document, name: live.document.name ?? live.name }
     await live.update({ document, revision: live.revision + 1, updatedBy: user.id }, { transaction })
+    // Open live editors take the restored document in as an update, in the same transaction as the restore.
+    await liveDocumentSaved(network.id, document, user.id, transaction)
     return { kept, revision: live.revision, document }
   })
   if (!('kept' in outcome)) {
@@ -38,8 +43,6 @@ export default defineEventHandler(async (event): Promise<RestoreResultDto> => {
       data: { revision: outcome.stale },
     })
   }
-  // Open live editors take the restored document in as an update; without it their next merge would write the old one back.
-  await liveDocumentSaved(network.id, outcome.document, user.id)
   await recordAudit('snapshot.restored', user.id, project.id, {
     snapshotId: snapshot.id, title: snapshot.title, networkId: network.id, revision: outcome.revision, keptAsSnapshotId: outcome.kept.id,
   })

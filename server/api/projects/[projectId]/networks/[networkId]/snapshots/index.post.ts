@@ -1,6 +1,5 @@
 import { createSnapshotSchema } from '../../../../../../../shared/schemas/review'
 import { Network, Snapshot } from '../../../../../../database/models'
-import { mergeLiveState } from '../../../../../../live/store'
 import type { SnapshotDto } from '../../../../../../../shared/types/review'
 
 /**
@@ -13,7 +12,7 @@ export default defineEventHandler(async (event): Promise<SnapshotDto> => {
   const body = await readBodyAs(event, createSnapshotSchema)
   const found = await requireNetwork(event, project.id)
   // Co-editors' last keystrokes wait in the live update log for the next merge; fold them in now so the snapshot holds them.
-  await mergeLiveState(found.id)
+  await requireMergedLiveState(found.id)
   const network = (await Network.findByPk(found.id))!
   if (body.revision !== undefined && body.revision !== network.revision) {
     throw createError({
