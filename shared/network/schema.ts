@@ -21,8 +21,9 @@ export const blockLayoutSchema = z.looseObject({
 export const blockSpecSchema = z.looseObject({
   id: z.string().min(1, 'block id must not be empty').max(LIMITS.blockIdLength, `a block id may have at most ${LIMITS.blockIdLength} characters`),
   type: z.string().min(1, 'block type must not be empty').max(40, 'block type is too long (40 characters at most)'),
-  params: z.record(z.string().max(40, 'a parameter name may have at most 40 characters'), paramValue).default({})
-    .refine(p => Object.keys(p).length <= LIMITS.paramsPerBlock, `a block may have at most ${LIMITS.paramsPerBlock} parameters`),
+  params: z.record(z.string(), paramValue).default({})
+    .refine(p => Object.keys(p).length <= LIMITS.paramsPerBlock, `a block may have at most ${LIMITS.paramsPerBlock} parameters`)
+    .refine(p => Object.keys(p).every(k => k.length <= 40), 'a parameter name may have at most 40 characters'),
   layout: blockLayoutSchema.optional(),
 })
 
@@ -59,11 +60,13 @@ export const networkDocumentSchema = z.looseObject(
     version: z.literal(1),
     name: z.string().max(LIMITS.nameLength, `a network name may have at most ${LIMITS.nameLength} characters`).optional(),
     referenceImpedance: paramValue.optional(),
-    variables: z.record(z.string().max(LIMITS.variableNameLength, `a variable name may have at most ${LIMITS.variableNameLength} characters`), paramValue)
-      .refine(v => Object.keys(v).length <= LIMITS.variables, `a network may have at most ${LIMITS.variables} variables`).optional(),
+    variables: z.record(z.string(), paramValue)
+      .refine(v => Object.keys(v).length <= LIMITS.variables, `a network may have at most ${LIMITS.variables} variables`)
+      .refine(v => Object.keys(v).every(k => k.length <= LIMITS.variableNameLength), `a variable name may have at most ${LIMITS.variableNameLength} characters`).optional(),
     sweep: sweepSchema.optional(),
-    substrates: z.record(z.string().max(LIMITS.variableNameLength, `a substrate name may have at most ${LIMITS.variableNameLength} characters`), substrateSchema)
-      .refine(v => Object.keys(v).length <= LIMITS.substrates, `a network may have at most ${LIMITS.substrates} substrates`).optional(),
+    substrates: z.record(z.string(), substrateSchema)
+      .refine(v => Object.keys(v).length <= LIMITS.substrates, `a network may have at most ${LIMITS.substrates} substrates`)
+      .refine(v => Object.keys(v).every(k => k.length <= LIMITS.variableNameLength), `a substrate name may have at most ${LIMITS.variableNameLength} characters`).optional(),
     blocks: z.array(blockSpecSchema).max(LIMITS.blocks, `a network may have at most ${most(LIMITS.blocks)} blocks`),
     wires: z.array(wireSchema).max(LIMITS.wires, `a network may have at most ${most(LIMITS.wires)} wires`),
   },
