@@ -4,6 +4,7 @@ import { prepareDatabase } from './lib/database-setup'
 import { buildIfStale } from './lib/build'
 import { sessionSecret } from './lib/secret'
 import { startServer, stopProcess } from './lib/server-process'
+import { demoAccountsWithPublishedPassword, demoRefusal, isLoopback } from './lib/demo-safety'
 
 // Everything the start command keeps lives in the git-ignored .data folder.
 const root = resolve(import.meta.dirname, '..')
@@ -24,9 +25,19 @@ async function main() {
   try {
     await ensureDatabase(cluster, 'portwright')
     const url = databaseUrl(cluster, 'portwright')
-    const { migrated, seeded } = await prepareDatabase(url, { seed: process.env.PORTWRIGHT_SEED !== '0' })
+    // Demo accounts have a published password: they are seeded only for an app this machine alone can reach.
+    const local = isLoopback(host)
+    const { migrated, seeded } = await prepareDatabase(url, { seed: local && process.env.PORTWRIGHT_SEED !== '0' })
     if (migrated.length) console.log(`Applied migrations: ${migrated.join(', ')}`)
     if (seeded) console.log('Loaded the demo data (Quillmere Microwave Lab).')
+    if (!local) {
+      const open = await demoAccountsWithPublishedPassword(url)
+      if (open.length) {
+        console.error(demoRefusal(host, open))
+        stopDatabase()
+        process.exit(1)
+      }
+    }
     buildIfStale(root)
     const server = await startServer(root, { NUXT_DATABASE_URL: url, NUXT_SESSION_PASSWORD: secret }, port, host)
     console.log(`\nPortwright is running at http://${host === '0.0.0.0' ? '127.0.0.1' : host}:${port}/  (Ctrl-C stops it and its database)\n`)

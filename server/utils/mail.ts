@@ -1,3 +1,4 @@
+import { hostname } from 'node:os'
 import type { H3Event } from 'h3'
 import nodemailer, { type Transporter } from 'nodemailer'
 import { OutboxMessage } from '../database/models'
@@ -74,11 +75,21 @@ export async function sendMail(to: string, content: MailContent): Promise<boolea
 }
 
 /**
- * An absolute link into the app for e-mails: from PORTWRIGHT_PUBLIC_URL when set (the
- * address users reach, behind any proxy), otherwise from the request itself.
+ * An absolute link into the app for e-mails: from PORTWRIGHT_PUBLIC_URL when set (the address users reach,
+ * behind any proxy), otherwise the address this server listens on. Never from a request header: a forged
+ * Host would otherwise put someone else's site into our mail (OWASP ASVS 5.0, V13 configuration).
  */
-export function appLink(event: H3Event, path: string): string {
+export function appLink(_event: H3Event, path: string): string {
+  return `${appBaseUrl()}${path}`
+}
+
+/** The app's own address for links: PORTWRIGHT_PUBLIC_URL, else http://HOST:PORT as the server was started. */
+export function appBaseUrl(): string {
   const configured = process.env.PORTWRIGHT_PUBLIC_URL?.replace(/\/+$/, '')
-  const base = configured || getRequestURL(event, { xForwardedHost: trustProxy(), xForwardedProto: trustProxy() }).origin
-  return `${base}${path}`
+  if (configured) return configured
+  const host = process.env.NITRO_HOST || process.env.HOST || '127.0.0.1'
+  const port = process.env.NITRO_PORT || process.env.PORT || '3000'
+  // A wildcard address is no place to send anyone; the machine's name is the best guess without configuration.
+  const shown = host === '0.0.0.0' || host === '::' ? hostname() : host.includes(':') ? `[${host}]` : host
+  return `http://${shown}:${port}`
 }

@@ -53,14 +53,43 @@ describe('sign-in', () => {
 })
 
 describe('sign-in limits', () => {
-  it('locks an account after 5 failed attempts, even with the right password, from any address', async () => {
+  it('attack: guessing from one address locks that address out of the account, not its owner elsewhere', async () => {
     const { email } = await newSignedInUser()
+    const attacker = new ApiClient()
     for (let i = 0; i < 5; i++) {
-      expect((await new ApiClient().post('/api/auth/signin', { email, password: 'wrong-password-here' })).status).toBe(401)
+      expect((await attacker.post('/api/auth/signin', { email, password: 'wrong-password-here' })).status).toBe(401)
     }
-    const locked = await new ApiClient().post('/api/auth/signin', { email, password: TEST_PASSWORD })
+    const locked = await attacker.post('/api/auth/signin', { email, password: TEST_PASSWORD })
     expect(locked.status).toBe(429)
     expect(locked.body.message).toMatch(/Too many failed sign-in attempts/)
+    // The owner, signing in from their own address, is not locked out by the stranger.
+    expect((await new ApiClient().post('/api/auth/signin', { email, password: TEST_PASSWORD })).status).toBe(200)
+  })
+
+  it('attack: 20 parallel wrong passwords are each counted before any is checked', async () => {
+    const { email } = await newSignedInUser()
+    const attacker = new ApiClient()
+    const answers = await Promise.all(Array.from({ length: 20 }, () => attacker.post('/api/auth/signin', { email, password: 'parallel-guess-123' })))
+    const statuses = answers.map(a => a.status)
+    // At most the pair's 5 points reach the password check; every other guess is refused unread.
+    expect(statuses.filter(s => s === 401).length).toBeLessThanOrEqual(5)
+    expect(statuses.filter(s => s === 429).length).toBeGreaterThanOrEqual(15)
+  })
+
+  it('attack: guesses spread over many addresses meet the account-wide ceiling', async () => {
+    const { email } = await newSignedInUser()
+    for (let i = 0; i < 50; i++) await new ApiClient().post('/api/auth/signin', { email, password: 'spread-guess-1234' })
+    expect((await new ApiClient().post('/api/auth/signin', { email, password: TEST_PASSWORD })).status).toBe(429)
+  })
+
+  it('attack: a forged X-Forwarded-For entry on the left does not change the counted address', async () => {
+    const { email } = await newSignedInUser()
+    const address = '10.251.1.1'
+    for (let i = 0; i < 5; i++) {
+      // The client writes a fresh fake address each time; the proxy's own entry (rightmost) stays the same.
+      await new ApiClient({ address: `192.0.2.${i}, ${address}` }).post('/api/auth/signin', { email, password: 'wrong-password-here' })
+    }
+    expect((await new ApiClient({ address: `198.51.100.7, ${address}` }).post('/api/auth/signin', { email, password: TEST_PASSWORD })).status).toBe(429)
   })
 
   it('limits one address trying many accounts', async () => {
@@ -73,6 +102,18 @@ describe('sign-in limits', () => {
     // Another address is not affected.
     const { email } = await newSignedInUser()
     expect((await new ApiClient().post('/api/auth/signin', { email, password: TEST_PASSWORD })).status).toBe(200)
+  })
+})
+
+describe('sign-up limits', () => {
+  it('attack: one address creating accounts in bulk', async () => {
+    const address = `10.252.${Math.floor(Math.random() * 250)}.3`
+    const statuses: number[] = []
+    for (let i = 0; i < 11; i++) {
+      statuses.push((await new ApiClient({ address }).post('/api/auth/signup', { email: `bulk-${i}-${crypto.randomUUID()}@test.example`, name: 'Bulk', password: 'bulk-password-1234' })).status)
+    }
+    expect(statuses.slice(0, 10).every(s => s === 201)).toBe(true)
+    expect(statuses[10]).toBe(429)
   })
 })
 

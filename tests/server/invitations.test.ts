@@ -80,6 +80,17 @@ describe('invitations', () => {
     expect((await new ApiClient().get(`/api/invitations/${token}`)).body.status).toBe('expired')
   })
 
+  it('attack: a forged host header does not put another site into the mailed link', async () => {
+    const email = `forged-${randomUUID()}@test.example`
+    // No Origin header, so the same-site check lets the request through to the mail it sends.
+    const forger = new ApiClient({ origin: null })
+    forger.cookie = owner.client.cookie
+    const mail = await mailDuring([email], () => forger.request('POST', `/api/projects/${projectId}/invitations`, { email, role: 'viewer' }, { 'x-forwarded-host': 'evil.example', 'x-forwarded-proto': 'https' }))
+    expect(mail).toHaveLength(1)
+    expect(mail[0]!.text).not.toContain('evil.example')
+    expect(mail[0]!.text).toContain(`http://127.0.0.1:${process.env.PORTWRIGHT_TEST_PORT}/invitations/`)
+  })
+
   it('expire seven days after sending', async () => {
     const { id } = await invite('viewer')
     const row = (await sql('SELECT expires_at - created_at AS life FROM invitations WHERE id = $1', [id])).rows[0]

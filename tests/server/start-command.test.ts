@@ -16,8 +16,8 @@ const port = Number(process.env.PORTWRIGHT_TEST_PORT) + 22
 const dbPort = Number(process.env.PORTWRIGHT_TEST_DB_PORT) + 22
 const url = `http://127.0.0.1:${port}`
 
-function start(): Promise<{ child: ChildProcess; output: () => string }> {
-  const env = { ...process.env, PORT: String(port), PORTWRIGHT_DB_PORT: String(dbPort), PORTWRIGHT_DATA_DIR: dataDir }
+function start(extra: Record<string, string> = {}): Promise<{ child: ChildProcess; output: () => string }> {
+  const env = { ...process.env, PORT: String(port), PORTWRIGHT_DB_PORT: String(dbPort), PORTWRIGHT_DATA_DIR: dataDir, ...extra }
   delete env.NUXT_SESSION_PASSWORD
   delete env.NUXT_DATABASE_URL
   const child = spawn(process.execPath, ['--import', 'tsx', 'scripts/start.ts'], { cwd: root, env, stdio: ['ignore', 'pipe', 'pipe'] })
@@ -85,6 +85,24 @@ describe('npm start', () => {
     const projects = await (await fetch(`${url}/api/projects`, { headers: { cookie } })).json() as { name: string }[]
     expect(projects.map(p => p.name)).toContain('Survives a restart')
     expect(await stop(second.child)).toBe(0)
+  }, 240_000)
+
+  it('attack: the published demo password on a server others can reach — refused until the demo accounts are disabled', async () => {
+    const env = { ...process.env, HOST: '0.0.0.0', PORT: String(port), PORTWRIGHT_DB_PORT: String(dbPort), PORTWRIGHT_DATA_DIR: dataDir }
+    delete env.NUXT_SESSION_PASSWORD
+    delete env.NUXT_DATABASE_URL
+    const refused = spawnSync(process.execPath, ['--import', 'tsx', 'scripts/start.ts'], { cwd: root, env, encoding: 'utf8', timeout: 120_000 })
+    expect(refused.status).toBe(1)
+    expect(refused.stderr).toContain('will not listen on 0.0.0.0 while demo accounts still have the published demo password')
+    expect(refused.stderr).toContain('npm run demo:disable')
+    expect(dbAnswers()).toBe(false)
+
+    const disabled = spawnSync(process.execPath, ['--import', 'tsx', 'scripts/demo-disable.ts'], { cwd: root, env, encoding: 'utf8', timeout: 120_000 })
+    expect(disabled.stdout).toContain('Disabled 5 demo accounts')
+    const open = await start({ HOST: '0.0.0.0' })
+    const attempt = await fetch(`${url}/api/auth/signin`, { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ email: 'ines@quillmere.example', password: 'quillmere-demo-2026' }) })
+    expect(attempt.status).toBe(401)
+    expect(await stop(open.child)).toBe(0)
   }, 240_000)
 
   it('refuses to start with a session secret shorter than 32 characters', () => {

@@ -9,16 +9,16 @@ let decoyHash: Promise<string> | undefined
 export default defineEventHandler(async (event) => {
   const body = await readBodyAs(event, signInSchema)
   const address = clientAddress(event)
-  await assertSignInAllowed(body.email, address)
+  // The point is taken before the password is looked at, so parallel guesses are each counted.
+  await reserveSignInAttempt(body.email, address)
   useDatabase()
   const user = await User.findOne({ where: { email: body.email } })
   decoyHash ??= hashPassword(crypto.randomUUID())
   const valid = await verifyPassword(user?.passwordHash ?? await decoyHash, body.password)
   if (!user || !valid) {
-    await recordFailedSignIn(body.email, address)
     throw createError({ statusCode: 401, message: 'E-mail or password is wrong.' })
   }
-  await clearAccountFailures(body.email)
+  await signInSucceeded(body.email, address)
   await setUserSession(event, { user: { id: user.id, email: user.email, name: user.name }, version: user.sessionVersion })
   return toUserDto(user)
 })

@@ -5,6 +5,7 @@ import { User } from '../../database/models'
 /** Creates an account and signs it in. */
 export default defineEventHandler(async (event) => {
   const body = await readBodyAs(event, signUpSchema)
+  await reserveSignUp(clientAddress(event))
   useDatabase()
   const passwordHash = await hashPassword(body.password)
   try {

@@ -1,0 +1,61 @@
+import { randomBytes } from 'node:crypto'
+import { Hash } from '@adonisjs/hash'
+import { Scrypt } from '@adonisjs/hash/drivers/scrypt'
+import { QueryTypes } from 'sequelize'
+import { connectDatabase } from '../../server/database/connect'
+import { DEMO_PASSWORD, demoPeople } from '../../server/database/seeders/demo-scenario'
+
+const hasher = new Hash(new Scrypt({}))
+const demoEmails = demoPeople.map(p => p.email)
+
+/** Whether an address the app listens on reaches only this machine. */
+export function isLoopback(host: string): boolean {
+  return host === 'localhost' || host === '::1' || host === '[::1]' || /^127\.\d{1,3}\.\d{1,3}\.\d{1,3}$/.test(host)
+}
+
+/** Demo accounts that still sign in with the README's published password. */
+export async function demoAccountsWithPublishedPassword(url: string): Promise<string[]> {
+  const sequelize = connectDatabase(url, { pool: 1 })
+  try {
+    const rows = await sequelize.query<{ email: string, password_hash: string }>(
+      'SELECT email, password_hash FROM users WHERE email IN (:emails)',
+      { replacements: { emails: demoEmails }, type: QueryTypes.SELECT },
+    )
+    const open: string[] = []
+    for (const row of rows) if (await hasher.verify(row.password_hash, DEMO_PASSWORD)) open.push(row.email)
+    return open
+  } finally {
+    await sequelize.close()
+  }
+}
+
+/** Gives every demo account a random password nobody knows and ends its sessions; returns how many changed. */
+export async function disableDemoAccounts(url: string): Promise<number> {
+  const sequelize = connectDatabase(url, { pool: 1 })
+  try {
+    let changed = 0
+    for (const email of demoEmails) {
+      const hash = await hasher.make(randomBytes(32).toString('base64url'))
+      const [, count] = await sequelize.query(
+        'UPDATE users SET password_hash = :hash, session_version = session_version + 1 WHERE email = :email',
+        { replacements: { hash, email }, type: QueryTypes.UPDATE },
+      )
+      changed += Number(count) || 0
+    }
+    return changed
+  } finally {
+    await sequelize.close()
+  }
+}
+
+/** The refusal printed when the app would serve a network with the README's demo password still valid. */
+export function demoRefusal(host: string, emails: string[]): string {
+  return [
+    `Portwright will not listen on ${host} while demo accounts still have the published demo password:`,
+    ...emails.map(e => `  ${e}`),
+    'Anyone who has read the README could sign in as them. Either',
+    '  npm run demo:disable        (gives every demo account a random password nobody knows), or',
+    '  set their passwords through the app on 127.0.0.1 first, or',
+    '  start with a fresh PORTWRIGHT_DATA_DIR and PORTWRIGHT_SEED=0 (no demo data at all).',
+  ].join('\n')
+}
