@@ -1,4 +1,5 @@
 // Nuxt configuration: one app, one process (pages, API and websocket on one port).
+import { join } from 'node:path'
 
 // PORTWRIGHT_BUILD_NAME gives a build its own folders, so that two builds in one checkout
 // (say, a test run and a development server) do not overwrite each other.
@@ -25,6 +26,23 @@ export default defineNuxtConfig({
   nitro: {
     experimental: { websocket: true },
     output: { dir: `.output${suffix}` },
+    hooks: {
+      // Server-side solves run in worker threads (server/utils/solve-pool.ts); their entry is bundled on its own
+      // beside the server's, because a worker cannot load a chunk of Nitro's bundle.
+      async compiled(nitro) {
+        const { build } = await import('esbuild')
+        await build({
+          entryPoints: [join(nitro.options.rootDir, 'server/workers/solve-summary.ts')],
+          outfile: join(nitro.options.output.serverDir, 'workers/solve-summary.mjs'),
+          bundle: true,
+          platform: 'node',
+          format: 'esm',
+          target: 'node20',
+          minify: true,
+          logLevel: 'warning',
+        })
+      },
+    },
   },
   runtimeConfig: {
     databaseUrl: '',

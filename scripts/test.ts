@@ -42,6 +42,8 @@ async function main(): Promise<number> {
       NUXT_SESSION_PASSWORD: secret,
       // Tests stand in for many clients by sending X-Forwarded-For.
       PORTWRIGHT_TRUST_PROXY: '1',
+      // A short budget, so the hostile-solve test meets it quickly; honest test networks solve in milliseconds.
+      PORTWRIGHT_SOLVE_TIME_LIMIT_MS: '3000',
     }
     server = await startServer(root, env, appPort)
     const vitest = spawnSync('npx', [

@@ -5,11 +5,11 @@ import type { NetworkDocument } from '../../shared/network/types'
 import type {
   CommentAnchor, CommentDto, PersonDto, ReviewDto, SnapshotListItemDto, SnapshotSummary,
 } from '../../shared/types/review'
-import { snapshotSummary } from '../../shared/review/snapshot-summary'
 import { findMentions } from '../../shared/review/mentions'
 import { formatHz } from '../../shared/review/summary-lines'
 import { mentionMail } from '../mail/messages'
 import { listMembers } from './members'
+import { summariseInPool } from './solve-pool'
 
 /** Loads a snapshot of the given project from the route's `snapshotId`; 404 when it is not there. */
 export async function requireSnapshot(event: H3Event, projectId: string): Promise<{ snapshot: Snapshot; network: Network }> {
@@ -57,7 +57,8 @@ export async function summariseDocument(projectId: string, document: NetworkDocu
     byRef.set(n.id, n.document)
     if (!byRef.has(n.name)) byRef.set(n.name, n.document)
   }
-  return snapshotSummary(document, { resolveSubnetwork: ref => byRef.get(ref) })
+  // Solved in the worker pool with a time and memory budget, never on the event loop every team shares.
+  return summariseInPool({ document, networks: [...byRef] })
 }
 
 /** List entries for snapshots, with their latest review and open comment threads. */

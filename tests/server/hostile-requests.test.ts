@@ -91,6 +91,41 @@ describe('hostile requests', () => {
     expect(many.body.message).toMatch(/at most 2,000 blocks/)
   })
 
+  it('attack: an allowed but heavy solve (a subnetwork used 135 times, each of 135 lines, 2,001 points) is stopped at the budget', async () => {
+    const inner = `Heavy inner ${crypto.randomUUID()}`
+    const chain = (next: string | null) => {
+      const ids = Array.from({ length: 135 }, (_, i) => `B${i}`)
+      return {
+        format: 'portwright.network', version: 1, name: 'Heavy', referenceImpedance: 50,
+        sweep: { start: 1e9, stop: 2e9, points: 20_001 },
+        blocks: [{ id: 'P1', type: 'port', params: { index: 1 } }, { id: 'P2', type: 'port', params: { index: 2 } },
+          ...ids.map(id => (next ? { id, type: 'subnetwork', params: { network: next } } : { id, type: 'line', params: { impedance: 50, degrees: 90, at: 1e9 } }))],
+        wires: [['P1.1', 'B0.1'], ...ids.slice(1).map((id, i) => [`B${i}.2`, `${id}.1`]), ['B134.2', 'P2.1']],
+      }
+    }
+    expect((await stranger.client.post(`/api/projects/${strangerProject}/networks`, { name: inner, document: chain(null) })).status).toBe(201)
+    const outer = await stranger.client.post(`/api/projects/${strangerProject}/networks`, { name: 'Heavy outer', document: chain(inner) })
+    expect(outer.status).toBe(201)
+    const started = performance.now()
+    const snap = stranger.client.post(`/api/projects/${strangerProject}/networks/${outer.body.id}/snapshots`, { title: 'Heavy' })
+    // While the worker grinds, the event loop answers everyone else.
+    const healthTimes: number[] = []
+    for (let i = 0; i < 5; i++) {
+      const t = performance.now()
+      expect((await new ApiClient().get('/api/health')).status).toBe(200)
+      healthTimes.push(performance.now() - t)
+      await new Promise(r => setTimeout(r, 200))
+    }
+    const refused = await snap
+    const refusedAfter = performance.now() - started
+    expect(refused.status).toBe(422)
+    expect(refused.body.message).toMatch(/took longer than 3 s to solve on the server/)
+    // Bounds, not speed targets: health stays responsive, the refusal comes near the (test run's 3 s) budget.
+    expect(Math.max(...healthTimes)).toBeLessThan(1_000)
+    expect(refusedAfter).toBeLessThan(15_000)
+    console.log(`hostile solve refused after ${refusedAfter.toFixed(0)} ms; health ${healthTimes.map(t => t.toFixed(0)).join(', ')} ms`)
+  })
+
   it('health keeps answering and an honest snapshot still gives S21 = −3.01 dB after all of the above', async () => {
     const started = performance.now()
     expect((await new ApiClient().get('/api/health')).status).toBe(200)
