@@ -134,3 +134,21 @@ describe('hostile requests', () => {
     expect(await honestSnapshotS21()).toBeCloseTo(-3.0103, 3)
   })
 })
+
+describe('security headers', () => {
+  it('attack: framing the app (clickjacking), sniffing a download as script, leaking URLs to other sites', async () => {
+    for (const path of ['/signin', '/api/health', '/favicon.svg']) {
+      const response = await fetch(`${appUrl}${path}`)
+      expect(response.headers.get('x-content-type-options'), path).toBe('nosniff')
+      expect(response.headers.get('x-frame-options'), path).toBe('DENY')
+      expect(response.headers.get('referrer-policy'), path).toBe('strict-origin-when-cross-origin')
+      expect(response.headers.get('content-security-policy'), path).toMatch(/frame-ancestors 'none'/)
+    }
+    const page = await fetch(`${appUrl}/signin`)
+    const policy = page.headers.get('content-security-policy')!
+    // Inline scripts are allowed by hash only; no 'unsafe-inline' or 'unsafe-eval' for scripts.
+    const scriptSrc = policy.split('; ').find(d => d.startsWith('script-src'))!
+    expect(scriptSrc).toMatch(/^script-src 'self'( 'sha256-[A-Za-z0-9+/=]+')+$/)
+    expect(await page.text()).toContain('Portwright')
+  })
+})

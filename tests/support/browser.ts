@@ -18,12 +18,20 @@ export async function launchBrowser(): Promise<{ context: BrowserContext; page: 
     args: ['--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync'],
   })
   const page = context.pages()[0] ?? await context.newPage()
+  // Every page a browser test opens must work under the app's content security policy: a violation fails the test.
+  const violations: string[] = []
+  const watch = (p: Page) => p.on('console', (message) => {
+    if (/Content Security Policy/i.test(message.text())) violations.push(message.text())
+  })
+  watch(page)
+  context.on('page', watch)
   return {
     context,
     page,
     close: async () => {
       await context.close()
       rmSync(profile, { recursive: true, force: true })
+      if (violations.length) throw new Error(`content security policy violations:\n${violations.join('\n')}`)
     },
   }
 }
