@@ -5,7 +5,7 @@ import {
   log2Dependencies, logDependencies, maxDependencies, minDependencies, modDependencies, multiplyDependencies, parseDependencies,
   piDependencies, powDependencies, roundDependencies, signDependencies, sinDependencies, sinhDependencies, smallerDependencies,
   smallerEqDependencies, sqrtDependencies, subtractDependencies, tanDependencies, tanhDependencies, unaryMinusDependencies,
-  unaryPlusDependencies, unequalDependencies, unitDependencies,
+  unaryPlusDependencies, unequalDependencies, unitDependencies, type FactoryFunctionMap,
 } from 'mathjs'
 
 /**
@@ -21,7 +21,7 @@ export const valueMath = create({
   piDependencies, powDependencies, roundDependencies, signDependencies, sinDependencies, sinhDependencies, smallerDependencies,
   smallerEqDependencies, sqrtDependencies, subtractDependencies, tanDependencies, tanhDependencies, unaryMinusDependencies,
   unaryPlusDependencies, unequalDependencies, unitDependencies,
-})
+} as unknown as FactoryFunctionMap)
 
 const toNumber = (x: unknown, name: string): number => {
   if (typeof x !== 'number') throw new Error(`${name} takes a plain number of decibels or a plain ratio`)
