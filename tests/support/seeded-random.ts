@@ -1,14 +1,5 @@
-/** A small seeded generator (mulberry32, a well-known 32-bit mixer) for fuzz tests that must repeat exactly. */
-export function seededRandom(seed: number): () => number {
-  let a = seed >>> 0
-  return () => {
-    a = (a + 0x6D2B79F5) >>> 0
-    let t = a
-    t = Math.imul(t ^ (t >>> 15), t | 1)
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61)
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296
-  }
-}
+// The solver's own seeded generator (mulberry32), so fuzz tests and random join orders share one implementation.
+export { seededRandom } from '../../shared/solver/join-order'
 
 /** One of the items, chosen by `random`. */
 export function pick<T>(random: () => number, items: readonly T[]): T {

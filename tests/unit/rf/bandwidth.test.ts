@@ -8,7 +8,7 @@ const F0 = 2.45e9
 
 describe('spec-mask bandwidth', () => {
   it('quarter-wave transformer: swept bandwidth equals the closed form', () => {
-    // Pozar, Microwave Engineering, 4th ed., eq. 5.64 (primer §6): for Z0 = 50 Ω, RL = 100 Ω, Γm = 0.1,
+    // Pozar, Microwave Engineering, 4th ed., eq. 5.64: for Z0 = 50 Ω, RL = 100 Ω, Γm = 0.1,
     // Δf/f0 = 2 − (4/π)·acos[(Γm/√(1 − Γm²))·2√(Z0 RL)/|RL − Z0|].
     const z0 = 50, rl = 100, gm = 0.1
     const closed = 2 - (4 / Math.PI) * Math.acos((gm / Math.sqrt(1 - gm * gm)) * (2 * Math.sqrt(z0 * rl)) / Math.abs(rl - z0))

@@ -17,7 +17,7 @@ describe('level figures', () => {
   })
 
   it('return loss, VSWR, insertion loss, isolation, coupling', () => {
-    // Primer §2 (Blank & Buntschuh, Handbook of Microwave Technology, vol. I, ch. 7): RL = −20 log|Γ|;
+    // Blank & Buntschuh, Handbook of Microwave Technology, vol. I, ch. 7 [memory]; also Pozar, 4th ed., §2.3: RL = −20 log|Γ|;
     // VSWR = (1 + |Γ|)/(1 − |Γ|): |Γ| = 1/3 gives 2, |Γ| = 0.1 gives 1.2222 and RL 20 dB.
     const gamma = series([1 / 3, 0], [0, 0.1], [1, 0])
     expect(returnLoss(gamma)[1]).toBeCloseTo(20, 12)
@@ -31,12 +31,12 @@ describe('level figures', () => {
   })
 
   it('directivity is isolation minus coupling', () => {
-    // Primer §2: directivity = isolation − coupling; |S31| = 0.1 (20 dB), |S41| = 0.001 (60 dB) → 40 dB.
+    // Pozar, Microwave Engineering, 4th ed., §7.3 (directional couplers, eq. 7.23): directivity = isolation − coupling; |S31| = 0.1 (20 dB), |S41| = 0.001 (60 dB) → 40 dB.
     expect(directivity(series([0.1, 0]), series([0, 0.001]))[0]).toBeCloseTo(40, 12)
   })
 
   it('amplitude imbalance and phase difference between two transmissions', () => {
-    // Ideal quadrature split (primer §5): S21 = −j/√2, S31 = −1/√2 → 0 dB imbalance and S21 leads S31 by 90°.
+    // Ideal quadrature split (Pozar, 4th ed., §7.5, eq. 7.69, branch-line S-matrix): S21 = −j/√2, S31 = −1/√2 → 0 dB imbalance and S21 leads S31 by 90°.
     const s21 = series([0, -Math.SQRT1_2], [0.5, 0]), s31 = series([-Math.SQRT1_2, 0], [0.25, 0])
     expect(amplitudeImbalance(s21, s31)[0]).toBeCloseTo(0, 12)
     expect(amplitudeImbalance(s21, s31)[1]).toBeCloseTo(6.0206, 4)
@@ -54,7 +54,7 @@ describe('phase figures', () => {
   })
 
   it('group delay of a matched line is its length over the phase velocity', () => {
-    // τ = −dφ/dω (primer §2); a 90° line at f0 has τ = 1/(4 f0) at every frequency (Pozar, 4th ed., §2.1, TEM line).
+    // τ = −dφ/dω (Pozar, 4th ed., §2.7, group velocity and delay) [memory for the section]; a 90° line at f0 has τ = 1/(4 f0) at every frequency (Pozar, 4th ed., §2.1, TEM line).
     const f0 = 2.45e9
     const freqs = Array.from({ length: 41 }, (_, k) => 1e9 + k * 0.1e9)
     const r = solveAt(doc([port(1), port(2), { id: 'L', type: 'line', params: { impedance: 50, degrees: 90, at: 'f0' } }], [['P1.1', 'L.1'], ['L.2', 'P2.1']]), freqs)

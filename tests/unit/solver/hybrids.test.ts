@@ -11,7 +11,7 @@ const ports = (n: number) => Array.from({ length: n }, (_, i) => port(i + 1))
 const wiredTo = (id: string, n: number): Array<[string, string]> => Array.from({ length: n }, (_, i) => [`P${i + 1}.1`, `${id}.${i + 1}`])
 const single = (type: string, params: Record<string, unknown>, n: number) => doc([...ports(n), { id: 'B', type, params }], wiredTo('B', n))
 
-// Pozar, Microwave Engineering, 4th ed., §7.5, as quoted in the primer §5:
+// Pozar, Microwave Engineering, 4th ed., §7.5:
 // S = −(1/√2)[[0, j, 1, 0], [j, 0, 0, 1], [1, 0, 0, j], [0, 1, j, 0]].
 const QUADRATURE: C[][] = [
   [[0, 0], [0, -H], [-H, 0], [0, 0]],
@@ -19,14 +19,14 @@ const QUADRATURE: C[][] = [
   [[-H, 0], [0, 0], [0, 0], [0, -H]],
   [[0, 0], [-H, 0], [0, -H], [0, 0]],
 ]
-// Pozar, 4th ed., §7.8, as quoted in the primer §6: S = (−j/√2)[[0, 1, 1, 0], [1, 0, 0, −1], [1, 0, 0, 1], [0, −1, 1, 0]].
+// Pozar, 4th ed., §7.8: S = (−j/√2)[[0, 1, 1, 0], [1, 0, 0, −1], [1, 0, 0, 1], [0, −1, 1, 0]].
 const RING: C[][] = [
   [[0, 0], [0, -H], [0, -H], [0, 0]],
   [[0, -H], [0, 0], [0, 0], [0, H]],
   [[0, -H], [0, 0], [0, 0], [0, -H]],
   [[0, 0], [0, H], [0, -H], [0, 0]],
 ]
-// Pozar, 4th ed., §7.3, as quoted in the primer §6: S = (−j/√2)[[0, 1, 1], [1, 0, 0], [1, 0, 0]].
+// Pozar, 4th ed., §7.3: S = (−j/√2)[[0, 1, 1], [1, 0, 0], [1, 0, 0]].
 const DIVIDER: C[][] = [
   [[0, 0], [0, -H], [0, -H]],
   [[0, -H], [0, 0], [0, 0]],
@@ -65,7 +65,7 @@ describe('quadrature hybrid', () => {
 
   it('at exactly twice f0 the ring of half-wave arms traps a resonance: reported, and the sweep goes on with the limit', () => {
     // Four λ/2 arms form a 2λ ring whose standing wave has voltage nulls at all four ports
-    // (common practice): the primer §4 asks for such a resonance to be reported with its frequency.
+    // (common practice): such a resonance is reported with its frequency.
     const prepared = prepareNetwork(branchLineHybrid)
     if (!prepared.ok) throw new Error('example must prepare')
     const solved = solveNetwork(prepared.network, Float64Array.of(2.4e9, 2 * F0, 5e9))
@@ -80,7 +80,7 @@ describe('quadrature hybrid', () => {
   })
 
   it('one section has a 20 dB return-loss bandwidth of 10–20 %', () => {
-    // Usable bandwidth of a one-section branch-line is about 10–20 % (common practice; primer §5).
+    // Usable bandwidth of a one-section branch-line is about 10–20 % (common practice).
     const f = sweepFrequencies({ start: 1.8e9, stop: 3.1e9, points: 1301 })
     const r = solveAt(branchLineHybrid, Array.from(f))
     const band = findBandwidth(r, { center: F0, conditions: [{ measure: 'returnLoss', port: 1, min: 20 }] })

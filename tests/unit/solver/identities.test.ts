@@ -84,11 +84,11 @@ describe('identities on random networks', () => {
       const shuffled = solveAt(network, FREQUENCIES, { joinOrder: 'random', seed: seed * 7 })
       for (let k = 0; k < FREQUENCIES.length; k++) {
         const m = matrix(auto, k)
-        // Reciprocal networks have S = Sᵀ (primer §2; Pozar, 4th ed., §4.3).
+        // Reciprocal networks have S = Sᵀ (Pozar, 4th ed., §4.3).
         expect(maxDiff(m, transpose(m))).toBeLessThan(1e-10)
-        // Passive networks have all singular values ≤ 1 (primer §2).
+        // Passive networks have all singular values ≤ 1 (Pozar, 4th ed., §4.3, passive networks [memory for the section]).
         expect(largestSingularValue(m)).toBeLessThanOrEqual(1 + 1e-9)
-        // Lossless networks have SᴴS = I (primer §2; Pozar, 4th ed., eq. 4.53).
+        // Lossless networks have SᴴS = I (Pozar, 4th ed., eq. 4.53).
         if (!lossy) expect(maxDiff(gram(m), identity(m.length))).toBeLessThan(1e-9)
         // The answer cannot depend on the order of joining (common practice).
         expect(maxDiff(m, matrix(byDocument, k))).toBeLessThan(1e-9)
