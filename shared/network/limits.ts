@@ -28,4 +28,11 @@ export const DOCUMENT_LIMITS = {
   subnetworkDepth: 8,
   /** Blocks of a network with every subnetwork use expanded (each use counts its blocks again). */
   expandedBlocks: 20_000,
+  /** Conditions of a document's spec. */
+  specConditions: 100,
+  /** Entries of `tunables`, and of `tolerances`. */
+  tunables: 200,
+  tolerances: 500,
+  /** Characters of a tunable or tolerance key (`BLOCK.param` or a variable name). */
+  valueKeyLength: 82,
 } as const

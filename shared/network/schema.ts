@@ -49,15 +49,49 @@ export const substrateSchema = z.looseObject({
   conductivity: paramValue.optional(),
 })
 
+const port = z.number({ error: 'a port must be a number' }).int('a port must be a whole number').min(1, 'ports count from 1')
+const portPair = z.tuple([port, port], { error: 'must be two ports, such as [2, 3]' })
+const level = z.number({ error: 'must be a number of decibels' }).finite('must be a finite number')
+
+/** One spec condition (contract 1.1); the measure names which fields it takes. */
+export const specConditionSchema = z.discriminatedUnion('measure', [
+  z.looseObject({ measure: z.literal('returnLoss'), port, min: level }),
+  z.looseObject({ measure: z.literal('vswr'), port, max: z.number({ error: 'must be a number' }).min(1, 'a VSWR is at least 1') }),
+  z.looseObject({ measure: z.enum(['insertionLoss', 'isolation', 'coupling']), from: port, to: port, min: level.optional(), max: level.optional() }),
+  z.looseObject({ measure: z.literal('amplitudeImbalance'), from: port, to: portPair, max: z.number({ error: 'must be a number of decibels' }).min(0, 'must not be negative') }),
+  z.looseObject({ measure: z.literal('phaseDifference'), from: port, to: portPair, target: z.number({ error: 'must be a number of degrees' }).finite(), tolerance: z.number({ error: 'must be a number of degrees' }).min(0, 'must not be negative') }),
+], { error: 'must be one of returnLoss, vswr, insertionLoss, isolation, coupling, amplitudeImbalance, phaseDifference' })
+
+/** Guards a document's `spec` (contract 1.1): centre, optional band and the conditions to meet. */
+export const specDocumentSchema = z.looseObject({
+  center: paramValue,
+  band: z.looseObject({ start: paramValue, stop: paramValue }).optional(),
+  conditions: z.array(specConditionSchema).max(LIMITS.specConditions, `a spec may have at most ${LIMITS.specConditions} conditions`),
+})
+
+const valueKey = z.string().min(1, 'must not be empty').max(LIMITS.valueKeyLength, `a key may have at most ${LIMITS.valueKeyLength} characters`)
+
+/** Guards `tunables` (contract 1.1): KEY → { min, max }. */
+export const tunablesSchema = z.record(valueKey, z.looseObject({ min: paramValue, max: paramValue }))
+  .refine(v => Object.keys(v).length <= LIMITS.tunables, `a network may have at most ${LIMITS.tunables} tunables`)
+
+/** Guards `tolerances` (contract 1.1): KEY → { relative } or { absolute }, with an optional distribution. */
+export const tolerancesSchema = z.record(valueKey, z.looseObject({
+  relative: z.number({ error: 'must be a fraction such as 0.05' }).min(0, 'must not be negative').max(1, 'must be a fraction of at most 1').optional(),
+  absolute: paramValue.optional(),
+  distribution: z.enum(['uniform', 'normal'], { error: 'must be uniform or normal' }).optional(),
+}).refine(t => (t.relative === undefined) !== (t.absolute === undefined), 'give either relative or absolute, not both or neither'))
+  .refine(v => Object.keys(v).length <= LIMITS.tolerances, `a network may have at most ${LIMITS.tolerances} tolerances`)
+
 /**
- * Structural schema of a version-1 network document. It guards the shape only;
+ * Structural schema of a network document, version 1 or 1.1. It guards the shape only;
  * units, names and topology are checked by the evaluator and the topology checker.
  * Unknown keys are accepted and kept, because the contract may be extended.
  */
 export const networkDocumentSchema = z.looseObject(
   {
     format: z.literal('portwright.network'),
-    version: z.literal(1),
+    version: z.union([z.literal(1), z.literal(1.1)], { error: 'version must be 1 or 1.1' }),
     name: z.string().max(LIMITS.nameLength, `a network name may have at most ${LIMITS.nameLength} characters`).optional(),
     referenceImpedance: paramValue.optional(),
     variables: z.record(z.string(), paramValue)
@@ -69,6 +103,9 @@ export const networkDocumentSchema = z.looseObject(
       .refine(v => Object.keys(v).every(k => k.length <= LIMITS.variableNameLength), `a substrate name may have at most ${LIMITS.variableNameLength} characters`).optional(),
     blocks: z.array(blockSpecSchema).max(LIMITS.blocks, `a network may have at most ${most(LIMITS.blocks)} blocks`),
     wires: z.array(wireSchema).max(LIMITS.wires, `a network may have at most ${most(LIMITS.wires)} wires`),
+    spec: specDocumentSchema.optional(),
+    tunables: tunablesSchema.optional(),
+    tolerances: tolerancesSchema.optional(),
   },
   { error: (issue) => (issue.input === null || typeof issue.input !== 'object' ? 'a network document must be a JSON object' : undefined) },
 )

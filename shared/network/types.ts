@@ -46,10 +46,47 @@ export interface Substrate {
   [extra: string]: unknown
 }
 
-/** The whole network document, version 1. Unknown extra keys are kept. */
+/** A frequency band as written: ends in Hz or expressions with units. */
+export interface SpecBand {
+  start: ParamValue
+  stop: ParamValue
+}
+
+/** A spec condition as written (contract 1.1); ports count from 1, levels in dB, angles in degrees. */
+export type SpecConditionSpec =
+  | { measure: 'returnLoss'; port: number; min: number }
+  | { measure: 'vswr'; port: number; max: number }
+  | { measure: 'insertionLoss' | 'isolation' | 'coupling'; from: number; to: number; min?: number; max?: number }
+  | { measure: 'amplitudeImbalance'; from: number; to: [number, number]; max: number }
+  | { measure: 'phaseDifference'; from: number; to: [number, number]; target: number; tolerance: number }
+
+/** The design's goals (contract 1.1): met when every condition holds at every sweep frequency in `band`, or at `center`. */
+export interface SpecDocument {
+  center: ParamValue
+  band?: SpecBand
+  conditions: SpecConditionSpec[]
+  [extra: string]: unknown
+}
+
+/** What an optimiser may change (`BLOCK.param` or a variable name) and within what range. */
+export interface TunableSpec {
+  min: ParamValue
+  max: ParamValue
+  [extra: string]: unknown
+}
+
+/** Manufacturing spread of a value: relative (fraction) or absolute; `normal` takes it as 3σ. */
+export type ToleranceSpec =
+  & ({ relative: number; absolute?: never } | { absolute: ParamValue; relative?: never })
+  & { distribution?: 'uniform' | 'normal'; [extra: string]: unknown }
+
+/** Document versions this code reads: 1, and 1.1 with its optional keys. */
+export type DocumentVersion = 1 | 1.1
+
+/** The whole network document, version 1 or 1.1. Unknown extra keys are kept. */
 export interface NetworkDocument {
   format: 'portwright.network'
-  version: 1
+  version: DocumentVersion
   name?: string
   referenceImpedance?: ParamValue
   variables?: Record<string, ParamValue>
@@ -57,6 +94,10 @@ export interface NetworkDocument {
   substrates?: Record<string, Substrate>
   blocks: BlockSpec[]
   wires: Wire[]
+  /** Contract 1.1: goals, what may be tuned, manufacturing spread. */
+  spec?: SpecDocument
+  tunables?: Record<string, TunableSpec>
+  tolerances?: Record<string, ToleranceSpec>
   [extra: string]: unknown
 }
 
