@@ -6,7 +6,7 @@ import { existsSync, readFileSync } from 'node:fs'
 import { dirname, resolve } from 'node:path'
 import { evaluateQuantity } from '../shared/network/expression'
 import type { Problem } from '../shared/network/types'
-import type { SubnetworkResolver, SweepSettings } from '../shared/solver/index'
+import type { PrepareOptions, SubnetworkResolver, SweepSettings } from '../shared/solver/index'
 
 /** Prints one line per problem on standard error and exits with status 2; nothing goes to standard output. */
 export function fail(problems: Array<Problem | string>): never {
@@ -43,6 +43,11 @@ export function fileResolver(documentPath: string): SubnetworkResolver {
     const text = readFileSync(path, 'utf8')
     return JSON.parse(text)
   }
+}
+
+/** How every command prepares a document read from a file: what it refers to is loaded relative to that file. */
+export function cliPrepareOptions(documentPath: string): PrepareOptions {
+  return { resolveSubnetwork: fileResolver(documentPath) }
 }
 
 /** Turns --start/--stop/--points/--spacing into a sweep override, or fails naming the option. */

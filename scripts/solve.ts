@@ -6,7 +6,7 @@
 import { parseArgs } from 'node:util'
 import { prepareNetwork, resolveSweep, solveNetwork, sweepFrequencies, type SolveResult } from '../shared/solver/index'
 import { writeTouchstone } from '../shared/touchstone/write'
-import { fail, fileResolver, readDocument, sweepOverride } from './network-cli'
+import { cliPrepareOptions, fail, readDocument, sweepOverride } from './network-cli'
 
 function toJson(result: SolveResult): string {
   const n = result.ports
@@ -37,7 +37,7 @@ function main(): void {
   if (format !== 'touchstone' && format !== 'json') fail([`--format: must be touchstone or json (got "${format}")`])
   const path = positionals[0]!
   const override = sweepOverride(values)
-  const prepared = prepareNetwork(readDocument(path), { resolveSubnetwork: fileResolver(path) })
+  const prepared = prepareNetwork(readDocument(path), cliPrepareOptions(path))
   if (!prepared.ok) fail(prepared.problems)
   const sweep = resolveSweep(prepared.network.sweep, override)
   if (!sweep.ok) fail(sweep.problems)

@@ -7,7 +7,7 @@ import { magnitudeDb } from '../rf/magnitude-db'
 import { phaseDeg } from '../rf/phase-deg'
 import { sParameter } from '../rf/s-parameter'
 import type { SParameterSet } from '../rf/types'
-import { specMaskSchema } from '../schemas/spec-mask'
+import { resolveSpec } from '../network/spec'
 
 /** A transmission from port 1 at the centre frequency; `db` is null where it is exactly zero. */
 export interface TransferFigure {
@@ -91,16 +91,16 @@ function keyFigures(at: SParameterSet): Pick<SnapshotSummary, 'returnLoss' | 'tr
  */
 export function snapshotSummary(document: NetworkDocument, options: SnapshotSummaryOptions = {}): SnapshotSummary {
   const maxPoints = options.maxPoints ?? 2001
-  const spec = document.spec === undefined ? undefined : specMaskSchema.safeParse(document.spec)
+  const spec = resolveSpec(document)
   const points = Math.min(typeof document.sweep?.points === 'number' ? document.sweep.points : 201, maxPoints)
   const swept = solveDocument(document, { ...options, sweep: { points } })
   if (!swept.ok) return { solved: false, problem: swept.problems[0]?.message ?? 'the network cannot be solved' }
   const f = swept.result.frequencies
-  const centre = centreOf(document, spec?.success ? spec.data.center : undefined, { start: f[0]!, stop: f[f.length - 1]! })
+  const centre = centreOf(document, spec?.ok ? spec.spec.center : undefined, { start: f[0]!, stop: f[f.length - 1]! })
   const atCentre = solveDocument(document, { ...options, sweep: { start: centre.frequency, stop: centre.frequency, points: 1 } })
   if (!atCentre.ok) return { solved: false, centre, problem: atCentre.problems[0]?.message ?? 'the network cannot be solved at the centre' }
   let bandwidth: BandwidthResult | null = null
-  if (spec && !spec.success) bandwidth = { ok: false, reason: `the spec mask is not valid (${spec.error.issues[0]?.message ?? 'unknown problem'})` }
-  else if (spec?.success) bandwidth = findBandwidth(swept.result, spec.data)
+  if (spec && !spec.ok) bandwidth = { ok: false, reason: `the spec cannot be read (${spec.problems[0]?.message ?? 'unknown problem'})` }
+  else if (spec?.ok) bandwidth = findBandwidth(swept.result, spec.spec)
   return { solved: true, centre, ports: atCentre.result.ports, ...keyFigures(atCentre.result), bandwidth }
 }

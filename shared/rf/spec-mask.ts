@@ -10,6 +10,8 @@
 export interface SpecMask {
   /** Frequency (Hz) the band is grown around; its fractional width is relative to it. */
   center: number
+  /** Contract 1.1: the band (Hz) over which every condition must hold for the design to meet its spec. */
+  band?: { start: number; stop: number }
   /** All must hold at a frequency for it to be in the band. */
   conditions: SpecCondition[]
 }

@@ -40,7 +40,14 @@ describe('snapshot summary', () => {
   it('says why a spec mask it cannot read gives no band', () => {
     const s = snapshotSummary({ ...structuredClone(branchLineHybrid), spec: { center: -1, conditions: [] } })
     expect(s.bandwidth).toMatchObject({ ok: false })
-    expect(s.bandwidth && !s.bandwidth.ok && s.bandwidth.reason).toMatch(/spec mask is not valid/)
+    expect(s.bandwidth && !s.bandwidth.ok && s.bandwidth.reason).toMatch(/spec cannot be read \(spec.center: must be greater than zero/)
+  })
+
+  it('reads a contract 1.1 spec whose centre is an expression of the document\'s variables', () => {
+    const withSpec: NetworkDocument = { ...structuredClone(branchLineHybrid), version: 1.1, spec: { center: 'f0', band: { start: '2.4 GHz', stop: '2.5 GHz' }, conditions: [{ measure: 'returnLoss', port: 1, min: 20 }] } }
+    const s = snapshotSummary(withSpec)
+    expect(s.centre).toEqual({ frequency: 2.45e9, from: 'spec' })
+    expect(s.bandwidth?.ok).toBe(true)
   })
 
   it('in-phase divider: equal split in phase, so 0 dB imbalance and 0° difference', () => {
