@@ -22,9 +22,11 @@ export async function sendPasswordResetLink(event: H3Event, email: string): Prom
   const user = await User.findOne({ where: { email } })
   if (!user) return
   const { token, hash } = newSecretToken()
-  const expiresAt = new Date(Date.now() + PASSWORD_RESET_LIFETIME_MS)
+  // Made and expiry times from one clock reading, so a link lives exactly 30 minutes.
+  const createdAt = new Date()
+  const expiresAt = new Date(createdAt.getTime() + PASSWORD_RESET_LIFETIME_MS)
   await PasswordReset.destroy({ where: { userId: user.id, usedAt: null } })
-  await PasswordReset.create({ userId: user.id, tokenHash: hash, expiresAt })
+  await PasswordReset.create({ userId: user.id, tokenHash: hash, createdAt, expiresAt })
   await sendMail(user.email, passwordResetMail({ name: user.name, url: appLink(event, `/password-reset/${token}`), expiresAt }))
 }
 
