@@ -281,6 +281,14 @@ describe('server-side sessions', () => {
     expect(row.user_agent).toHaveLength(200)
   })
 
+  it('attack: a cookie held before signing in again on the same browser stops working (no fixed session)', async () => {
+    const { client, email } = await newSignedInUser()
+    const before = copyOf(client)
+    expect((await client.post('/api/auth/signin', { email, password: TEST_PASSWORD })).status).toBe(200)
+    expect((await before.get('/api/auth/me')).status).toBe(401)
+    expect((await client.get('/api/auth/me')).status).toBe(200)
+  })
+
   it('"sign out everywhere" revokes every session row', async () => {
     const { client, id, email } = await newSignedInUser()
     await new ApiClient().post('/api/auth/signin', { email, password: TEST_PASSWORD })
