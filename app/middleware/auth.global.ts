@@ -1,7 +1,8 @@
 // Pages other than sign-in and sign-up need a session; the server checks again on every API call.
-const publicPages = new Set(['/signin', '/signup'])
+const publicPages = new Set(['/signin', '/signup', '/password-reset'])
 // An invitation link is opened before its holder has an account; the page signs up or in itself.
-const publicPrefixes = ['/invitations/']
+// A password-reset link is opened by someone who cannot sign in.
+const publicPrefixes = ['/invitations/', '/password-reset/']
 
 export default defineNuxtRouteMiddleware((to) => {
   const { loggedIn } = useUserSession()

@@ -7,7 +7,7 @@
 import { randomUUID } from 'node:crypto'
 import { LiveBus } from './bus'
 import { CLOSE, LiveRoom, roleWrites, type LivePeer } from './room'
-import { currentMemberships } from './store'
+import { currentMemberships, liveSessionIds } from './store'
 
 export interface HubOptions {
   databaseUrl: string
@@ -108,11 +108,14 @@ export class LiveHub {
     this.checking = (async () => {
       const peers = [...this.joinedRooms].map(([peer, room]) => ({ peer, networkId: room.networkId }))
       if (!peers.length) return
-      const current = await currentMemberships(peers.map(p => ({ networkId: p.networkId, userId: p.peer.userId })))
+      const [current, sessions] = await Promise.all([
+        currentMemberships(peers.map(p => ({ networkId: p.networkId, userId: p.peer.userId }))),
+        liveSessionIds([...new Set(peers.map(p => p.peer.sessionId))]),
+      ])
       for (const { peer, networkId } of peers) {
         const now = current.get(`${networkId} ${peer.userId}`)
         if (!now) peer.close(CLOSE.noAccess, 'no longer a member of this project')
-        else if (now.sessionVersion !== peer.sessionVersion) peer.close(CLOSE.sessionEnded, 'session ended')
+        else if (now.sessionVersion !== peer.sessionVersion || !sessions.has(peer.sessionId)) peer.close(CLOSE.sessionEnded, 'session ended')
         else if (now.role !== peer.role) {
           const wrote = roleWrites(peer.role)
           peer.role = now.role

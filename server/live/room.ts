@@ -28,7 +28,7 @@ const MAX_PRESENCE_CHARS = 8 * 1024
 export const CLOSE = {
   /** The update was undecodable or outside the document. */
   badUpdate: 4400,
-  /** The session ended (signed out everywhere). */
+  /** The session ended (signed out, signed out everywhere, revoked, password changed). */
   sessionEnded: 4401,
   /** No longer a member of the project, or the network is gone. */
   noAccess: 4403,
@@ -45,6 +45,8 @@ export interface LivePeer {
   readonly name: string
   role: string
   sessionVersion: number
+  /** The session row it came in with; revoking the row closes the connection. */
+  readonly sessionId: string
   send: (data: Uint8Array) => void
   close: (code: number, reason: string) => void
 }

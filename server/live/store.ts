@@ -171,6 +171,16 @@ export async function networkMembership(networkId: string, userId: string): Prom
   return rows.length ? { projectId: rows[0]!.project_id, role: rows[0]!.role, sessionVersion: rows[0]!.session_version } : null
 }
 
+/** Which of these session rows still let their holder in (not revoked): the periodic re-check of live connections. */
+export async function liveSessionIds(ids: string[]): Promise<Set<string>> {
+  if (!ids.length) return new Set()
+  const rows = await useDatabase().query<{ id: string }>(
+    'SELECT id FROM sessions WHERE id = ANY($1::uuid[]) AND revoked_at IS NULL',
+    { bind: [ids], type: QueryTypes.SELECT },
+  )
+  return new Set(rows.map(r => r.id))
+}
+
 /** Current roles (and session versions) for many (network, user) pairs at once: the periodic re-check. */
 export async function currentMemberships(pairs: Array<{ networkId: string, userId: string }>): Promise<Map<string, { role: string, sessionVersion: number }>> {
   const out = new Map<string, { role: string, sessionVersion: number }>()

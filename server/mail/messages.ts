@@ -121,3 +121,46 @@ export function decisionMail(input: {
   ], { url: input.url, label: 'See the review' })
   return { subject, text, html }
 }
+
+export function passwordResetMail(input: { name: string; url: string; expiresAt: Date }): MailContent {
+  const until = input.expiresAt.toUTCString()
+  const subject = 'Set a new Portwright password'
+  const text = [
+    `Hello ${input.name},`,
+    '',
+    'Someone — we hope you — asked to set a new password for your Portwright account.',
+    `Set it with this link (it works once, until ${until}):`,
+    input.url,
+    '',
+    'Setting a new password signs out every browser that is signed in to your account.',
+    'If you did not ask for this, ignore this message: your password stays as it is.',
+  ].join('\n')
+  const html = frame([
+    p(`Hello ${escapeHtml(input.name)},`),
+    p('Someone — we hope you — asked to set a new password for your Portwright account.'),
+    p(`The link works once, until ${escapeHtml(until)}. Setting a new password signs out every browser that is signed in to your account.`),
+  ], { url: input.url, label: 'Set a new password' }, ['If you did not ask for this, ignore this message: your password stays as it is.'])
+  return { subject, text, html }
+}
+
+export function passwordChangedMail(input: { name: string; how: 'changed' | 'reset'; when: Date; resetUrl: string }): MailContent {
+  const when = input.when.toUTCString()
+  const subject = 'Your Portwright password was changed'
+  const what = input.how === 'changed'
+    ? `Your password was changed on the account page on ${when}. Every other browser signed in to your account was signed out.`
+    : `Your password was set with a reset link on ${when}. Every browser signed in to your account was signed out.`
+  const text = [
+    `Hello ${input.name},`,
+    '',
+    what,
+    '',
+    'If this was you, there is nothing more to do.',
+    `If it was not, set a new password at once with this page and tell your site administrator: ${input.resetUrl}`,
+  ].join('\n')
+  const html = frame([
+    p(`Hello ${escapeHtml(input.name)},`),
+    p(escapeHtml(what)),
+    p('If this was you, there is nothing more to do. If it was not, set a new password at once and tell your site administrator.'),
+  ], { url: input.resetUrl, label: 'Set a new password' })
+  return { subject, text, html }
+}

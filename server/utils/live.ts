@@ -17,6 +17,11 @@ export async function liveAccessChanged(projectId: string): Promise<void> {
   await notifyAccessChanged(projectId)
 }
 
+/** Tells every app instance to re-check its live connections now because sessions were revoked. */
+export async function liveSessionsChanged(): Promise<void> {
+  await notifyAccessChanged('sessions')
+}
+
 /**
  * Folds the live update log into the network before something reads it whole (a snapshot, a restore). A log that
  * cannot be merged into a valid document answers 409 and leaves everything as stored.

@@ -20,9 +20,14 @@ const limits = () => ({
   perAccount: envNumber('PORTWRIGHT_SIGNIN_LIMIT_ACCOUNT_TOTAL', 50),
   perAddress: envNumber('PORTWRIGHT_SIGNIN_LIMIT_ADDRESS', 30),
   signUps: envNumber('PORTWRIGHT_SIGNUP_LIMIT_ADDRESS', 10),
+  resetsPerAddress: envNumber('PORTWRIGHT_RESET_LIMIT_ADDRESS', 10),
+  resetsPerAccount: envNumber('PORTWRIGHT_RESET_LIMIT_ACCOUNT', 3),
 })
 
-interface Limiters { pair: RateLimiterPostgres; account: RateLimiterPostgres; address: RateLimiterPostgres; signUp: RateLimiterPostgres }
+interface Limiters {
+  pair: RateLimiterPostgres; account: RateLimiterPostgres; address: RateLimiterPostgres; signUp: RateLimiterPostgres
+  resetAddress: RateLimiterPostgres; resetAccount: RateLimiterPostgres
+}
 let limiters: Limiters | undefined
 
 function useLimiters(): Limiters {
@@ -35,6 +40,8 @@ function useLimiters(): Limiters {
       account: new RateLimiterPostgres({ ...common, keyPrefix: 'signin-account-total', points: l.perAccount }),
       address: new RateLimiterPostgres({ ...common, keyPrefix: 'signin-address', points: l.perAddress }),
       signUp: new RateLimiterPostgres({ ...common, keyPrefix: 'signup-address', points: l.signUps, duration: SIGNUP_WINDOW_SECONDS }),
+      resetAddress: new RateLimiterPostgres({ ...common, keyPrefix: 'reset-address', points: l.resetsPerAddress, duration: SIGNUP_WINDOW_SECONDS }),
+      resetAccount: new RateLimiterPostgres({ ...common, keyPrefix: 'reset-account', points: l.resetsPerAccount, duration: SIGNUP_WINDOW_SECONDS }),
     }
   }
   return limiters
@@ -82,6 +89,31 @@ export async function reserveSignUp(address: string): Promise<void> {
     await useLimiters().signUp.consume(key(address))
   } catch (error) {
     if (error instanceof RateLimiterRes) throw tooMany([error], 'Too many accounts were created from your address.')
+    throw error
+  }
+}
+
+/** Consumes one password-reset request from the client address; 429 past the hourly limit. */
+export async function reservePasswordResetRequest(address: string): Promise<void> {
+  try {
+    await useLimiters().resetAddress.consume(key(address))
+  } catch (error) {
+    if (error instanceof RateLimiterRes) throw tooMany([error], 'Too many password-reset requests came from your address.')
+    throw error
+  }
+}
+
+/**
+ * Takes one reset mail from the account's hourly allowance, whether or not the account exists; false once it is
+ * used up. The caller then sends nothing but answers as always, so the limit neither floods a mailbox nor tells
+ * anyone which addresses have accounts.
+ */
+export async function takePasswordResetMail(email: string): Promise<boolean> {
+  try {
+    await useLimiters().resetAccount.consume(key(email))
+    return true
+  } catch (error) {
+    if (error instanceof RateLimiterRes) return false
     throw error
   }
 }

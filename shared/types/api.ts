@@ -42,3 +42,15 @@ export interface NetworkDto extends NetworkSummaryDto {
   document: NetworkDocument
   role: ProjectRole
 }
+
+/** One signed-in browser of the current account, for the account page. */
+export interface AccountSessionDto {
+  id: string
+  /** Browser and system read from the User-Agent ("Firefox on Linux"). */
+  device: string
+  userAgent: string
+  createdAt: string
+  lastSeenAt: string
+  /** The session this request came with. */
+  current: boolean
+}

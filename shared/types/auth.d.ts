@@ -9,5 +9,9 @@ declare module '#auth-utils' {
     /** Per-user session version; bumping it in the database revokes every session. */
     version: number
   }
+  interface SecureSessionData {
+    /** Secret naming this browser's row in `sessions` (only its SHA-256 is stored); absent in cookies made before server-side sessions. */
+    sid?: string
+  }
 }
 export {}

@@ -62,11 +62,30 @@ describe('invitations', () => {
   })
 
   it('two accepts racing for one link: exactly one joins', async () => {
-    const { token } = await invite('viewer')
-    const a = await newSignedInUser('Racer A')
-    const b = await newSignedInUser('Racer B')
-    const answers = await Promise.all([a.client.post(`/api/invitations/${token}/accept`), b.client.post(`/api/invitations/${token}/accept`)])
+    const { email, token } = await invite('viewer')
+    const first = new ApiClient()
+    expect((await first.post('/api/auth/signup', { email, name: 'Racer', password: TEST_PASSWORD })).status).toBe(201)
+    const second = new ApiClient()
+    expect((await second.post('/api/auth/signin', { email, password: TEST_PASSWORD })).status).toBe(200)
+    const answers = await Promise.all([first.post(`/api/invitations/${token}/accept`), second.post(`/api/invitations/${token}/accept`)])
     expect(answers.map(x => x.status).sort()).toEqual([200, 410])
+  })
+
+  it('attack: an invitation accepted by the wrong account is refused, naming the address partly hidden', async () => {
+    const { email, token } = await invite('editor')
+    const wrong = await newSignedInUser('Link finder')
+    const answer = await wrong.client.post(`/api/invitations/${token}/accept`)
+    expect(answer.status).toBe(403)
+    const masked = `i•••${email.split('@')[0]!.slice(-1)}@test.example`
+    expect(answer.body.message).toContain(`This invitation is for ${masked}, and you are signed in as ${wrong.email}.`)
+    expect(answer.body.message).toMatch(/Sign out, then open the link again/)
+    expect(answer.body.message).not.toContain(email)
+    expect((await wrong.client.get(`/api/projects/${projectId}`)).status).toBe(404)
+    // The link still works for the invited address, whatever the case it is typed in.
+    expect((await new ApiClient().get(`/api/invitations/${token}`)).body.status).toBe('pending')
+    const right = new ApiClient()
+    expect((await right.post('/api/auth/signup', { email: email.toUpperCase(), name: 'Rightful', password: TEST_PASSWORD })).status).toBe(201)
+    expect((await right.post(`/api/invitations/${token}/accept`)).status).toBe(200)
   })
 
   it('an expired link is refused clearly and joins nobody', async () => {
@@ -110,9 +129,10 @@ describe('invitations', () => {
       const mail = await mailDuring([email], () => owner.client.post(`/api/projects/${projectId}/invitations`, { email, role: 'viewer' }))
       mails.push(invitationToken(mail[0]!))
     }
-    const taker = await newSignedInUser('Taker')
-    expect((await taker.client.post(`/api/invitations/${mails[0]}/accept`)).status).toBe(410)
-    expect((await taker.client.post(`/api/invitations/${mails[1]}/accept`)).status).toBe(200)
+    const taker = new ApiClient()
+    expect((await taker.post('/api/auth/signup', { email, name: 'Taker', password: TEST_PASSWORD })).status).toBe(201)
+    expect((await taker.post(`/api/invitations/${mails[0]}/accept`)).status).toBe(410)
+    expect((await taker.post(`/api/invitations/${mails[1]}/accept`)).status).toBe(200)
   })
 
   it('an unknown or malformed token is not found; a member is not invited twice', async () => {

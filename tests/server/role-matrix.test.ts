@@ -1,8 +1,8 @@
 import { readdirSync, statSync } from 'node:fs'
 import { join, relative } from 'node:path'
 import { beforeAll, describe, expect, it } from 'vitest'
-import { ApiClient, newSignedInUser, signedIn } from '../support/http'
-import { invitationToken, mailDuring, outboxList } from '../support/mail'
+import { ApiClient, newSignedInUser, signedIn, TEST_PASSWORD } from '../support/http'
+import { invitationToken, mailDuring, outboxList, resetToken } from '../support/mail'
 
 /**
  * Every API route × every kind of caller. The table is the access policy; the
@@ -27,6 +27,8 @@ interface Fixture {
   ids: Record<'viewer' | 'reviewer' | 'editor' | 'owner', string>
   /** A snapshot of the matrix network, for routes that only read or comment on one. */
   snapshotId: string
+  /** An owner of projects outside the matrix, who invites the actors by their own addresses. */
+  inviter: ApiClient
 }
 
 interface RouteCase {
@@ -80,8 +82,29 @@ const policy: Record<string, RouteCase> = {
   'GET /api/invitations/:token': { rule: 'public', prepare: async f => ({ path: `/api/invitations/${(await invitation(f, f.projectId)).token}` }) },
   'POST /api/invitations/:token/accept': {
     rule: 'signed-in',
-    // A throwaway project: an outsider who accepts must stay an outsider of the matrix project.
-    prepare: async f => ({ path: `/api/invitations/${(await invitation(f, await throwawayProject(f))).token}/accept` }),
+    // Only the invited address may accept: each actor gets an invitation of its own address, to a project of an
+    // unrelated owner, so that an outsider who accepts stays an outsider of the matrix project.
+    prepare: async (f, actor) => ({ path: `/api/invitations/${await invitationFor(f, actor)}/accept` }),
+  },
+  'GET /api/account/sessions': { rule: 'signed-in', prepare: async () => ({ path: '/api/account/sessions' }) },
+  'DELETE /api/account/sessions/:sessionId': {
+    rule: 'signed-in',
+    // A second session of the same person is the one ended, so the shared client keeps its own.
+    prepare: async (f, actor) => ({ path: `/api/account/sessions/${await secondSessionOf(f, actor)}` }),
+  },
+  'POST /api/account/password': {
+    rule: 'signed-in',
+    // Runs as a fresh bystander (see sessionFor): a password change ends the person's other sessions.
+    prepare: async () => ({ path: '/api/account/password', body: { currentPassword: TEST_PASSWORD, newPassword: TEST_PASSWORD } }),
+  },
+  'POST /api/auth/password-reset': { rule: 'public', prepare: async () => ({ path: '/api/auth/password-reset', body: { email: `m-${crypto.randomUUID()}@test.example` } }) },
+  'POST /api/auth/password-reset/confirm': {
+    rule: 'public',
+    prepare: async () => {
+      const person = await newSignedInUser('Matrix forgetful')
+      const mail = await mailDuring([person.email], () => new ApiClient().post('/api/auth/password-reset', { email: person.email }), 1)
+      return { path: '/api/auth/password-reset/confirm', body: { token: resetToken(mail[0]!), password: TEST_PASSWORD } }
+    },
   },
   'GET /api/projects/:projectId/audit': { rule: 'owner', prepare: async f => ({ path: `/api/projects/${f.projectId}/audit` }) },
   'GET /api/projects/:projectId/invitations': { rule: 'owner', prepare: async f => ({ path: `/api/projects/${f.projectId}/invitations` }) },
@@ -165,6 +188,29 @@ async function invitation(f: Fixture, projectId: string): Promise<{ id: string; 
   return { id, token: invitationToken(mail[0]!) }
 }
 
+/** The e-mail of an actor's account (none for the anonymous caller). */
+async function emailOf(f: Fixture, actor: Actor): Promise<string | null> {
+  return actor === 'anonymous' ? null : (await f.clients[actor].get('/api/auth/me')).body.email
+}
+
+/** A token inviting the actor's own address (a fresh one for the anonymous caller) to a fresh project of another owner. */
+async function invitationFor(f: Fixture, actor: Actor): Promise<string> {
+  const email = await emailOf(f, actor) ?? `inv-${crypto.randomUUID()}@test.example`
+  const inviter = f.inviter
+  const projectId = (await inviter.post('/api/projects', { name: 'Invitation matrix' })).body.id
+  const mail = await mailDuring([email], () => inviter.post(`/api/projects/${projectId}/invitations`, { email, role: 'viewer' }))
+  return invitationToken(mail[0]!)
+}
+
+/** Signs the actor in a second time and returns that session's id (any id for the anonymous caller). */
+async function secondSessionOf(f: Fixture, actor: Actor): Promise<string> {
+  const email = await emailOf(f, actor)
+  if (!email) return crypto.randomUUID()
+  const second = await signedIn(email, actor === 'admin' ? 'quillmere-demo-2026' : TEST_PASSWORD)
+  const sessions = (await second.get('/api/account/sessions')).body as Array<{ id: string, current: boolean }>
+  return sessions.find(s => s.current)!.id
+}
+
 /** Every route file under server/api as "METHOD /api/path/:param". */
 function discoverRoutes(): string[] {
   const root = join(process.cwd(), 'server', 'api')
@@ -210,6 +256,7 @@ beforeAll(async () => {
   const network = await owner.client.post(`/api/projects/${projectId}/networks`, { name: 'Matrix network' })
   const snapshot = await owner.client.post(`/api/projects/${projectId}/networks/${network.body.id}/snapshots`, { title: 'Matrix snapshot' })
   const admin = await signedIn('ada@quillmere.example', 'quillmere-demo-2026')
+  const inviter = await newSignedInUser('Matrix inviter')
   fixture = {
     owner: owner.client,
     clients: { anonymous: new ApiClient(), outsider: others.outsider.client, admin, viewer: others.viewer.client, reviewer: others.reviewer.client, editor: others.editor.client, owner: owner.client },
@@ -219,6 +266,7 @@ beforeAll(async () => {
     spare: { id: spare.id, email: spare.email },
     ids: { viewer: others.viewer.id, reviewer: others.reviewer.id, editor: others.editor.id, owner: owner.id },
     snapshotId: snapshot.body.id,
+    inviter: inviter.client,
   }
   // The outbox rows need at least one message to open.
   await invitation(fixture, projectId)
@@ -247,6 +295,6 @@ describe('role matrix', () => {
 
 async function sessionFor(actor: Exclude<Actor, 'anonymous'>, route: string): Promise<ApiClient> {
   // Routes that start or end a session would replace or revoke the shared clients' cookies.
-  const touchesSession = /\/auth\/(signin|signup|signout|signout-everywhere)$/.test(route)
+  const touchesSession = /\/auth\/(signin|signup|signout|signout-everywhere)$|\/account\/password$/.test(route)
   return touchesSession ? (await newSignedInUser('Matrix bystander')).client : fixture.clients[actor]
 }

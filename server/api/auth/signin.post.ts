@@ -19,6 +19,6 @@ export default defineEventHandler(async (event) => {
     throw createError({ statusCode: 401, message: 'E-mail or password is wrong.' })
   }
   await signInSucceeded(body.email, address)
-  await setUserSession(event, { user: { id: user.id, email: user.email, name: user.name }, version: user.sessionVersion })
+  await startAccountSession(event, user)
   return toUserDto(user)
 })

@@ -10,7 +10,7 @@ export default defineEventHandler(async (event) => {
   const passwordHash = await hashPassword(body.password)
   try {
     const user = await User.create({ email: body.email, name: body.name, passwordHash })
-    await setUserSession(event, { user: { id: user.id, email: user.email, name: user.name }, version: user.sessionVersion })
+    await startAccountSession(event, user)
     await recordAudit('account.created', user.id, null, { email: user.email })
     setResponseStatus(event, 201)
     return toUserDto(user)

@@ -26,6 +26,7 @@ function toLivePeer(peer: Peer, admission: LiveAdmission): LivePeer {
     name: admission.name,
     role: admission.role,
     sessionVersion: admission.sessionVersion,
+    sessionId: admission.sessionId,
     send: (data) => {
       // A peer that does not read what it is sent is dropped before its backlog eats the server's memory.
       const socket = (peer as unknown as { websocket?: { bufferedAmount?: number } }).websocket
