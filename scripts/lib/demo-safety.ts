@@ -34,6 +34,7 @@ export async function disableDemoAccounts(url: string): Promise<number> {
   const sequelize = connectDatabase(url, { pool: 1 })
   try {
     let changed = 0
+    const [{ present }] = await sequelize.query<{ present: boolean }>("SELECT to_regclass('public.sessions') IS NOT NULL AS present", { type: QueryTypes.SELECT })
     for (const email of demoEmails) {
       const hash = await hasher.make(randomBytes(32).toString('base64url'))
       const [, count] = await sequelize.query(
@@ -41,6 +42,11 @@ export async function disableDemoAccounts(url: string): Promise<number> {
         { replacements: { hash, email }, type: QueryTypes.UPDATE },
       )
       changed += Number(count) || 0
+      // Their session rows are revoked too, so the account page lists none of them as active.
+      if (present) await sequelize.query(
+        'UPDATE sessions SET revoked_at = now() WHERE revoked_at IS NULL AND user_id IN (SELECT id FROM users WHERE email = :email)',
+        { replacements: { email }, type: QueryTypes.UPDATE },
+      )
     }
     return changed
   } finally {
