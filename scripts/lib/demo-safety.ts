@@ -34,7 +34,8 @@ export async function disableDemoAccounts(url: string): Promise<number> {
   const sequelize = connectDatabase(url, { pool: 1 })
   try {
     let changed = 0
-    const [{ present }] = await sequelize.query<{ present: boolean }>("SELECT to_regclass('public.sessions') IS NOT NULL AS present", { type: QueryTypes.SELECT })
+    const probe = await sequelize.query<{ present: boolean }>("SELECT to_regclass('public.sessions') IS NOT NULL AS present", { type: QueryTypes.SELECT })
+    const present = probe[0]?.present === true
     for (const email of demoEmails) {
       const hash = await hasher.make(randomBytes(32).toString('base64url'))
       const [, count] = await sequelize.query(
