@@ -14,10 +14,13 @@ import { ReviewEvent } from './ReviewEvent'
 import { OutboxMessage } from './OutboxMessage'
 import { NetworkLiveState } from './NetworkLiveState'
 import { NetworkUpdate } from './NetworkUpdate'
+import { AccessToken } from './AccessToken'
+import { AccessTokenProject } from './AccessTokenProject'
 
 export { User, Project, Membership, Network, Snapshot, Comment, StoredFile, AuditEvent }
 export { Invitation, Review, ReviewReviewer, ReviewEvent, OutboxMessage }
 export { NetworkLiveState, NetworkUpdate }
+export { AccessToken, AccessTokenProject }
 
 /** Binds every model to one Sequelize instance. */
 export function setupModels(sequelize: Sequelize): void {
@@ -26,4 +29,5 @@ export function setupModels(sequelize: Sequelize): void {
   }
   for (const model of [Invitation, Review, ReviewReviewer, ReviewEvent, OutboxMessage]) model.setup(sequelize)
   for (const model of [NetworkLiveState, NetworkUpdate]) model.setup(sequelize)
+  for (const model of [AccessToken, AccessTokenProject]) model.setup(sequelize)
 }
