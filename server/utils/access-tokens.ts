@@ -3,7 +3,8 @@ import { createHash, randomBytes } from 'node:crypto'
 import { z } from 'zod'
 import { Op } from 'sequelize'
 import { AccessToken, AccessTokenProject, Membership, Project, User } from '../database/models'
-import { ACCESS_TOKEN_PREFIX, type AccessTokenDto, type TokenRoleCeiling } from '../../shared/types/access-token'
+import { ACCESS_TOKEN_PREFIX, type AccessTokenDto } from '../../shared/types/access-token'
+import { effectiveTokenRole } from '../../shared/automation/effective-role'
 import type { ProjectRole } from '../../shared/types/api'
 
 /** A token's secret: the prefix and 32 random bytes (256 bits) in base64url. */
@@ -20,12 +21,6 @@ export function newAccessTokenSecret(): { secret: string; hash: string; hint: st
   return { secret, hash: hashAccessToken(secret), hint: secret.slice(0, ACCESS_TOKEN_PREFIX.length + 4) }
 }
 
-const rank: Record<ProjectRole, number> = { viewer: 0, reviewer: 1, editor: 2, owner: 3 }
-
-/** The role a token acts with in a project: the lower of its ceiling and its owner's membership role. */
-export function effectiveTokenRole(ceiling: TokenRoleCeiling, membership: ProjectRole): ProjectRole {
-  return rank[ceiling] <= rank[membership] ? ceiling : membership
-}
 
 /** The token, its owner and when it was checked: what a bearer request acts with. */
 export interface TokenAccess {
@@ -90,7 +85,7 @@ export async function requireTokenProjectRole(access: TokenAccess, project: stri
   const found = inScope && membership && await Project.findByPk(parsed.data)
   if (!found) throw notFound()
   const role = effectiveTokenRole(access.token.roleCeiling, membership.role)
-  if (rank[role] < rank[needed]) {
+  if (!roleAtLeast(role, needed)) {
     throw createError({ statusCode: 403, message: `This needs the ${needed} role or higher; this token acts as ${role} in the project.` })
   }
   return { ...access, project: found, role }

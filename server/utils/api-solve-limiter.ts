@@ -28,7 +28,7 @@ export async function reserveApiSolve(event: H3Event, tokenId: string): Promise<
   } catch (error) {
     if (!(error instanceof RateLimiterRes)) throw error
     const seconds = Math.max(1, Math.ceil(error.msBeforeNext / 1000))
-    setResponseHeader(event, 'Retry-After', String(seconds))
+    setResponseHeader(event, 'Retry-After', seconds)
     throw createError({ statusCode: 429, message: `This token has used its ${apiSolveLimit()} solves for this minute. Try again in ${seconds} s.` })
   }
 }
