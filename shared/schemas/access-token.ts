@@ -19,7 +19,7 @@ const frequency = z.union([z.number().finite().nonnegative(), z.string().max(100
 export const apiSweepSchema = z.object({
   start: frequency.optional(),
   stop: frequency.optional(),
-  points: z.number().int('points must be a whole number.').min(1, 'points must be at least 1.').max(DOCUMENT_LIMITS.sweepPoints, `points: at most ${DOCUMENT_LIMITS.sweepPoints} per request.`).optional(),
+  points: z.number().int('points must be a whole number.').min(1, 'points must be at least 1.').max(DOCUMENT_LIMITS.sweepPoints, `At most ${DOCUMENT_LIMITS.sweepPoints.toLocaleString('en')} points per request; split the band into several requests.`).optional(),
   spacing: z.enum(['linear', 'log'], { message: 'spacing must be linear or log.' }).optional(),
 }).strict()
 

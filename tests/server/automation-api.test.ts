@@ -234,7 +234,7 @@ describe('POST /api/v1/solve', () => {
     expect(shape.status).toBe(400)
     const over = await bearer(token, 'POST', '/api/v1/solve', { document: tiny, sweep: { points: 20_002 } })
     expect(over.status).toBe(400)
-    expect(over.body.message).toMatch(/20001/)
+    expect(over.body.message).toMatch(/sweep.points: At most 20,001 points per request/)
   })
 
   it('attack: a heavy but allowed solve is stopped at the time budget with 422 while the server answers others', async () => {
