@@ -31,16 +31,18 @@ export default defineNuxtConfig({
       // beside the server's, because a worker cannot load a chunk of Nitro's bundle.
       async compiled(nitro) {
         const { build } = await import('esbuild')
-        await build({
-          entryPoints: [join(nitro.options.rootDir, 'server/workers/solve-summary.ts')],
-          outfile: join(nitro.options.output.serverDir, 'workers/solve-summary.mjs'),
-          bundle: true,
-          platform: 'node',
-          format: 'esm',
-          target: 'node20',
-          minify: true,
-          logLevel: 'warning',
-        })
+        for (const name of ['solve-summary', 'solve-api']) {
+          await build({
+            entryPoints: [join(nitro.options.rootDir, `server/workers/${name}.ts`)],
+            outfile: join(nitro.options.output.serverDir, `workers/${name}.mjs`),
+            bundle: true,
+            platform: 'node',
+            format: 'esm',
+            target: 'node20',
+            minify: true,
+            logLevel: 'warning',
+          })
+        }
       },
     },
   },

@@ -2,10 +2,14 @@ import { existsSync } from 'node:fs'
 import { dirname, join } from 'node:path'
 import { Piscina } from 'piscina'
 import summariseInProcess, { type SummaryTask } from '../workers/solve-summary'
+import solveApiInProcess, { type ApiSolveTask } from '../workers/solve-api'
 import type { SnapshotSummary } from '../../shared/review/snapshot-summary'
+import type { ApiSolveOutcome } from '../../shared/automation/api-solve'
 
 /** File name of the bundled worker beside the built server's entry (`.output/server/workers/`). */
 export const SOLVE_WORKER_FILE = 'workers/solve-summary.mjs'
+/** File name of the bundled automation-API solve worker. */
+export const API_SOLVE_WORKER_FILE = 'workers/solve-api.mjs'
 
 const envNumber = (name: string, fallback: number): number => {
   const value = Number(process.env[name])
@@ -17,26 +21,28 @@ export function solveBudget(): { timeMs: number; memoryMb: number } {
   return { timeMs: envNumber('PORTWRIGHT_SOLVE_TIME_LIMIT_MS', 10_000), memoryMb: envNumber('PORTWRIGHT_SOLVE_MEMORY_MB', 256) }
 }
 
-let pool: Piscina | null | undefined
+const pools = new Map<string, Piscina | null>()
 
-function workerFile(): string | null {
-  // The built server is started as `node .output/server/index.mjs`; its bundled worker sits beside it.
+function workerFile(file: string): string | null {
+  // The built server is started as `node .output/server/index.mjs`; its bundled workers sit beside it.
   const entry = process.argv[1]
-  const candidate = entry ? join(dirname(entry), SOLVE_WORKER_FILE) : ''
+  const candidate = entry ? join(dirname(entry), file) : ''
   return candidate && existsSync(candidate) ? candidate : null
 }
 
-function usePool(): Piscina | null {
-  if (pool !== undefined) return pool
-  const filename = workerFile()
+/** One pool per worker entry, each with the same budget. */
+function usePool(file: string): Piscina | null {
+  const existing = pools.get(file)
+  if (existing !== undefined) return existing
+  const filename = workerFile(file)
   if (!filename) {
     // Only `nuxt dev` has no bundled worker; there solves run in-process, as a developer's machine can afford.
-    console.warn('[solve] no bundled solve worker found; solving in-process (development only)')
-    pool = null
-    return pool
+    console.warn(`[solve] no bundled worker ${file} found; solving in-process (development only)`)
+    pools.set(file, null)
+    return null
   }
   const { memoryMb } = solveBudget()
-  pool = new Piscina({
+  const pool = new Piscina({
     filename,
     minThreads: 1,
     maxThreads: 2,
@@ -45,6 +51,7 @@ function usePool(): Piscina | null {
     maxQueue: 32,
     resourceLimits: { maxOldGenerationSizeMb: memoryMb, maxYoungGenerationSizeMb: Math.max(16, Math.round(memoryMb / 8)) },
   })
+  pools.set(file, pool)
   return pool
 }
 
@@ -56,12 +63,21 @@ function overBudget(message: string) {
  * A snapshot summary solved in the pool, within the time and memory budget; past either the request answers
  * 422 in plain words, the worker is replaced and the server carries on.
  */
-export async function summariseInPool(task: SummaryTask): Promise<SnapshotSummary> {
-  const workers = usePool()
-  if (!workers) return summariseInProcess(task)
+export function summariseInPool(task: SummaryTask): Promise<SnapshotSummary> {
+  return runInPool(SOLVE_WORKER_FILE, task, summariseInProcess)
+}
+
+/** An automation-API solve in the pool, within the same budget: the contract's JSON text, or problems. */
+export function solveApiInPool(task: ApiSolveTask): Promise<ApiSolveOutcome> {
+  return runInPool(API_SOLVE_WORKER_FILE, task, solveApiInProcess)
+}
+
+async function runInPool<T, R>(file: string, task: T, inProcess: (task: T) => R): Promise<R> {
+  const workers = usePool(file)
+  if (!workers) return inProcess(task)
   const { timeMs, memoryMb } = solveBudget()
   try {
-    return await workers.run(task, { signal: AbortSignal.timeout(timeMs) }) as SnapshotSummary
+    return await workers.run(task, { signal: AbortSignal.timeout(timeMs) }) as R
   } catch (error) {
     const e = error as Error & { code?: string; name?: string }
     if (e.name === 'AbortError' || e.name === 'TimeoutError' || /aborted/i.test(e.message)) {

@@ -10,14 +10,20 @@ import { invitationToken, mailDuring, outboxList, resetToken } from '../support/
  * route that forgets its check answers a refused caller with 2xx and fails too.
  */
 // 'admin' is the demo site administrator, a member of no project; rule 'admin' is for site-administrator routes.
-type Actor = 'anonymous' | 'outsider' | 'admin' | 'viewer' | 'reviewer' | 'editor' | 'owner'
-type Rule = 'public' | 'signed-in' | 'admin' | 'viewer' | 'reviewer' | 'editor' | 'owner'
+// 'token' is a script holding the owner's personal access token (editor ceiling, the matrix project) and no cookie.
+// Bearer routes (/api/v1) take rule 'token' (any valid token) or 'token-viewer' (a token reaching the matrix
+// project as viewer or more); there every actor but 'anonymous' calls with a token of its own instead of its cookie.
+type Actor = 'anonymous' | 'outsider' | 'admin' | 'viewer' | 'reviewer' | 'editor' | 'owner' | 'token'
+type Rule = 'public' | 'signed-in' | 'admin' | 'viewer' | 'reviewer' | 'editor' | 'owner' | 'token' | 'token-viewer'
 
-const actors: Actor[] = ['anonymous', 'outsider', 'admin', 'viewer', 'reviewer', 'editor', 'owner']
+const actors: Actor[] = ['anonymous', 'outsider', 'admin', 'viewer', 'reviewer', 'editor', 'owner', 'token']
+const bearerRules = new Set<Rule>(['token', 'token-viewer'])
 const rank: Record<string, number> = { viewer: 0, reviewer: 1, editor: 2, owner: 3 }
 
 interface Fixture {
-  clients: Record<Exclude<Actor, 'anonymous'>, ApiClient> & { anonymous: ApiClient }
+  clients: Record<Exclude<Actor, 'anonymous' | 'token'>, ApiClient> & { anonymous: ApiClient }
+  /** Each signed-in actor's access token (members: the matrix project; outsider and admin: a project of their own). */
+  tokens: Record<Exclude<Actor, 'anonymous'>, string>
   owner: ApiClient
   projectId: string
   networkId: string
@@ -37,6 +43,9 @@ interface RouteCase {
   prepare: (f: Fixture, actor: Actor) => Promise<{ path: string; body?: unknown }>
 }
 
+/** One port on a matched load, solved at one frequency: the least a solve can be. */
+const matchedLoad = { format: 'portwright.network', version: 1, name: 'Matched load', referenceImpedance: 50, sweep: { start: 1e9, stop: 1e9, points: 1 },
+  blocks: [{ id: 'P1', type: 'port', params: { index: 1 } }, { id: 'R', type: 'load', params: { resistance: 50 } }], wires: [['P1.1', 'R.1']] }
 const networkDoc = (name: string) => ({ format: 'portwright.network', version: 1, name, referenceImpedance: 50, blocks: [], wires: [] })
 
 const policy: Record<string, RouteCase> = {
@@ -146,6 +155,24 @@ const policy: Record<string, RouteCase> = {
     rule: 'editor',
     prepare: async f => ({ path: `/api/projects/${f.projectId}/reviews/${await reviewFor(f, 'reviewer')}/withdraw` }),
   },
+  'GET /api/account/tokens': { rule: 'signed-in', prepare: async () => ({ path: '/api/account/tokens' }) },
+  'POST /api/account/tokens': {
+    rule: 'signed-in',
+    // A token reaches only the maker's projects: each actor names one of its own.
+    prepare: async (f, actor) => ({ path: '/api/account/tokens', body: { name: 'Matrix token', projects: [await projectOf(f, actor)], roleCeiling: 'viewer', expiresInDays: 1 } }),
+  },
+  'DELETE /api/account/tokens/:tokenId': {
+    rule: 'signed-in',
+    prepare: async (f, actor) => {
+      const maker = actor === 'anonymous' || actor === 'token' ? f.owner : f.clients[actor]
+      const made = await maker.post('/api/account/tokens', { name: 'Doomed token', projects: [await projectOf(f, actor)], roleCeiling: 'viewer', expiresInDays: 1 })
+      return { path: `/api/account/tokens/${made.body.id}` }
+    },
+  },
+  'GET /api/v1/openapi.json': { rule: 'public', prepare: async () => ({ path: '/api/v1/openapi.json' }) },
+  'GET /api/v1/token': { rule: 'token', prepare: async () => ({ path: '/api/v1/token' }) },
+  'GET /api/v1/networks': { rule: 'token-viewer', prepare: async f => ({ path: `/api/v1/networks?project=${f.projectId}` }) },
+  'POST /api/v1/solve': { rule: 'token-viewer', prepare: async f => ({ path: '/api/v1/solve', body: { project: f.projectId, document: matchedLoad } }) },
   'DELETE /api/projects/:projectId/networks/:networkId': {
     rule: 'editor',
     prepare: async (f) => {
@@ -153,6 +180,14 @@ const policy: Record<string, RouteCase> = {
       return { path: `/api/projects/${f.projectId}/networks/${made.body.id}` }
     },
   },
+}
+
+/** A project the actor is a member of: the matrix project for members, one of their own for the others. */
+const ownProjects = new Map<Actor, string>()
+async function projectOf(f: Fixture, actor: Actor): Promise<string> {
+  if (actor === 'viewer' || actor === 'reviewer' || actor === 'editor' || actor === 'owner' || actor === 'anonymous' || actor === 'token') return f.projectId
+  if (!ownProjects.has(actor)) ownProjects.set(actor, (await f.clients[actor].post('/api/projects', { name: `Own project of ${actor}` })).body.id)
+  return ownProjects.get(actor)!
 }
 
 /** A second project with the same members, for calls that delete a project. */
@@ -233,6 +268,9 @@ function discoverRoutes(): string[] {
 function expectedStatus(rule: Rule, actor: Actor): 'allowed' | number {
   if (rule === 'public') return 'allowed'
   if (actor === 'anonymous') return 401
+  // A token works on bearer routes alone; sessions never reach them (tested below).
+  if (bearerRules.has(rule)) return rule === 'token' || !(actor === 'outsider' || actor === 'admin') ? 'allowed' : 404
+  if (actor === 'token') return 401
   if (rule === 'signed-in') return 'allowed'
   // Site-administrator routes answer 404 to everyone else, as a project does to outsiders.
   if (rule === 'admin') return actor === 'admin' ? 'allowed' : 404
@@ -267,7 +305,13 @@ beforeAll(async () => {
     ids: { viewer: others.viewer.id, reviewer: others.reviewer.id, editor: others.editor.id, owner: owner.id },
     snapshotId: snapshot.body.id,
     inviter: inviter.client,
+    tokens: {} as Fixture['tokens'],
   }
+  for (const actor of ['outsider', 'admin', 'viewer', 'reviewer', 'editor', 'owner'] as const) {
+    const made = await fixture.clients[actor].post('/api/account/tokens', { name: `Matrix ${actor}`, projects: [await projectOf(fixture, actor)], roleCeiling: 'editor', expiresInDays: 1 })
+    fixture.tokens[actor] = made.body.token
+  }
+  fixture.tokens.token = fixture.tokens.owner
   // The outbox rows need at least one message to open.
   await invitation(fixture, projectId)
 })
@@ -283,9 +327,12 @@ describe('role matrix', () => {
       const expected = expectedStatus(spec.rule, actor)
       it(`${route} as ${actor} → ${expected}`, async () => {
         const { path, body } = await spec.prepare(fixture, actor)
+        // Scripts (bearer routes, and the token actor everywhere) send a token and no cookie; the others their session.
+        const script = actor !== 'anonymous' && (actor === 'token' || bearerRules.has(spec.rule))
         // Session-ending routes get a fresh session of the same person, so later cases keep theirs.
-        const client = actor === 'anonymous' ? new ApiClient() : await sessionFor(actor, route)
-        const answer = await client.request(method, path, body ?? (method === 'GET' ? undefined : {}))
+        const client = actor === 'anonymous' || script ? new ApiClient() : await sessionFor(actor as Exclude<Actor, 'anonymous' | 'token'>, route)
+        const headers: Record<string, string> = script ? { authorization: `Bearer ${fixture.tokens[actor]}` } : {}
+        const answer = await client.request(method, path, body ?? (method === 'GET' ? undefined : {}), headers)
         if (expected === 'allowed') expect(answer.status, JSON.stringify(answer.body)).toBeLessThan(300)
         else expect(answer.status, JSON.stringify(answer.body)).toBe(expected)
       })
@@ -293,7 +340,18 @@ describe('role matrix', () => {
   }
 })
 
-async function sessionFor(actor: Exclude<Actor, 'anonymous'>, route: string): Promise<ApiClient> {
+describe('bearer routes refuse sessions', () => {
+  for (const [route, spec] of Object.entries(policy).filter(([, s]) => bearerRules.has(s.rule))) {
+    it(`${route} with the owner's session cookie and no token → 401`, async () => {
+      const { path, body } = await spec.prepare(fixture, 'owner')
+      const method = route.split(' ')[0]!
+      const answer = await fixture.owner.request(method, path, body ?? (method === 'GET' ? undefined : {}))
+      expect(answer.status, JSON.stringify(answer.body)).toBe(401)
+    })
+  }
+})
+
+async function sessionFor(actor: Exclude<Actor, 'anonymous' | 'token'>, route: string): Promise<ApiClient> {
   // Routes that start or end a session would replace or revoke the shared clients' cookies.
   const touchesSession = /\/auth\/(signin|signup|signout|signout-everywhere)$|\/account\/password$/.test(route)
   return touchesSession ? (await newSignedInUser('Matrix bystander')).client : fixture.clients[actor]

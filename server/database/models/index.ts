@@ -16,11 +16,14 @@ import { NetworkLiveState } from './NetworkLiveState'
 import { NetworkUpdate } from './NetworkUpdate'
 import { AccountSession } from './AccountSession'
 import { PasswordReset } from './PasswordReset'
+import { AccessToken } from './AccessToken'
+import { AccessTokenProject } from './AccessTokenProject'
 
 export { User, Project, Membership, Network, Snapshot, Comment, StoredFile, AuditEvent }
 export { Invitation, Review, ReviewReviewer, ReviewEvent, OutboxMessage }
 export { NetworkLiveState, NetworkUpdate }
 export { AccountSession, PasswordReset }
+export { AccessToken, AccessTokenProject }
 
 /** Binds every model to one Sequelize instance. */
 export function setupModels(sequelize: Sequelize): void {
@@ -30,4 +33,5 @@ export function setupModels(sequelize: Sequelize): void {
   for (const model of [Invitation, Review, ReviewReviewer, ReviewEvent, OutboxMessage]) model.setup(sequelize)
   for (const model of [NetworkLiveState, NetworkUpdate]) model.setup(sequelize)
   for (const model of [AccountSession, PasswordReset]) model.setup(sequelize)
+  for (const model of [AccessToken, AccessTokenProject]) model.setup(sequelize)
 }

@@ -15,9 +15,10 @@ function routeFiles(dir: string): string[] {
 }
 
 // Routes that serve people without a session (signing out works with an ended one too).
-const PUBLIC_ROUTES = new Set(['auth/signout.post.ts', 'auth/signin.post.ts', 'auth/signup.post.ts', 'auth/password-reset.post.ts', 'auth/password-reset/confirm.post.ts', 'health.get.ts', 'invitations/[token].get.ts'])
+const PUBLIC_ROUTES = new Set(['auth/signout.post.ts', 'auth/signin.post.ts', 'auth/signup.post.ts', 'auth/password-reset.post.ts', 'auth/password-reset/confirm.post.ts', 'health.get.ts', 'invitations/[token].get.ts', 'v1/openapi.json.get.ts'])
 const READS = /\b(readBodyAs|queryAs|readBody|readValidatedBody|getQuery|readMultipartFormData|readRawBody)\s*\(/
-const GATES = /\b(requireProjectRole|requireCurrentUser|requireCurrentSession|requireAdmin)\s*\(/
+// requireToken is the bearer gate of /api/v1 (cookies are never read there); requireTokenProjectRole follows it.
+const GATES = /\b(requireProjectRole|requireCurrentUser|requireCurrentSession|requireAdmin|requireToken)\s*\(/
 
 describe('route handlers: gate, then body, then work', () => {
   const files = routeFiles(apiDir)
