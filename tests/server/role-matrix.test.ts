@@ -223,9 +223,10 @@ async function invitation(f: Fixture, projectId: string): Promise<{ id: string; 
   return { id, token: invitationToken(mail[0]!) }
 }
 
-/** The e-mail of an actor's account (none for the anonymous caller). */
+/** The e-mail of an actor's account (none for the anonymous caller and the token actor). */
 async function emailOf(f: Fixture, actor: Actor): Promise<string | null> {
-  return actor === 'anonymous' ? null : (await f.clients[actor].get('/api/auth/me')).body.email
+  // The token actor calls with a token and no cookie: it has no session of its own to look up.
+  return actor === 'anonymous' || actor === 'token' ? null : (await f.clients[actor].get('/api/auth/me')).body.email
 }
 
 /** A token inviting the actor's own address (a fresh one for the anonymous caller) to a fresh project of another owner. */
