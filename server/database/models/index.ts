@@ -14,10 +14,12 @@ import { ReviewEvent } from './ReviewEvent'
 import { OutboxMessage } from './OutboxMessage'
 import { NetworkLiveState } from './NetworkLiveState'
 import { NetworkUpdate } from './NetworkUpdate'
+import { NetworkCheckpoint } from './NetworkCheckpoint'
 
 export { User, Project, Membership, Network, Snapshot, Comment, StoredFile, AuditEvent }
 export { Invitation, Review, ReviewReviewer, ReviewEvent, OutboxMessage }
 export { NetworkLiveState, NetworkUpdate }
+export { NetworkCheckpoint }
 
 /** Binds every model to one Sequelize instance. */
 export function setupModels(sequelize: Sequelize): void {
@@ -26,4 +28,5 @@ export function setupModels(sequelize: Sequelize): void {
   }
   for (const model of [Invitation, Review, ReviewReviewer, ReviewEvent, OutboxMessage]) model.setup(sequelize)
   for (const model of [NetworkLiveState, NetworkUpdate]) model.setup(sequelize)
+  NetworkCheckpoint.setup(sequelize)
 }
