@@ -130,6 +130,21 @@ describe('history checkpoints', () => {
     expect(event?.detail).toMatchObject({ checkpointId: target.id, networkId, revision: latest.revision + 1 })
   })
 
+  it('a checkpoint restore reaches an editor who has the network open live', async () => {
+    const networkId = await newNetwork('Restored under a live editor')
+    await save(editor.client, networkId, setImpedance(29))
+    const latest = await save(editor.client, networkId, setImpedance(47))
+    const target = (await checkpoints(networkId)).find(c => c.revision === latest.revision - 1)!
+    const live = liveClient(appUrl(), networkId, owner.client.cookie)
+    liveClients.push(live)
+    await synced(live)
+    expect(impedanceOf(live.read())).toBe(47)
+    const done = await editor.client.post(`${base}/networks/${networkId}/checkpoints/${target.id}/restore`, { revision: latest.revision })
+    expect(done.status, JSON.stringify(done.body)).toBe(200)
+    await until('the restored value at the live client', () => impedanceOf(live.read()) === 29)
+    live.destroy()
+  })
+
   it('live editing: at most one checkpoint per interval while edits arrive, and one when the last editor leaves', async () => {
     const networkId = await newNetwork('Edited live')
     const live = liveClient(appUrl(), networkId, editor.client.cookie)
