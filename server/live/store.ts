@@ -10,7 +10,7 @@ import { networkToYDoc, writeNetwork } from '../../shared/live/network-ydoc'
 import { readNetworkStrict } from '../../shared/live/strict-read'
 import type { NetworkDocument } from '../../shared/network/types'
 import { useDatabase } from '../utils/database'
-import { checkpointAfterMerge } from '../utils/checkpoints'
+import { checkpointAfterMerge, withoutRisk } from '../utils/checkpoints'
 
 /** Channel of "an update was stored": payload `<networkId> <updateId> <instanceId>`. */
 export const UPDATE_CHANNEL = 'portwright_live_update'
@@ -123,14 +123,14 @@ export async function mergeLiveState(networkId: string, options: { final?: boole
     )
     if (before.length) {
       const authors = [...new Set(updates.map(u => u.userId).filter((id): id is string => !!id))]
-      await checkpointAfterMerge({
+      await withoutRisk(transaction, `network ${networkId} after a live merge`, t => checkpointAfterMerge({
         networkId,
         document: parsed.document,
         revision: changed[0]?.revision ?? before[0]!.revision,
         replaced: changed.length ? { document: before[0]!.document, revision: before[0]!.revision, updatedBy: before[0]!.updated_by } : null,
         authors,
         final: options.final ?? false,
-      }, transaction)
+      }, t))
     }
     return { merged: updates.length, revision: changed[0]?.revision ?? null, invalid: false }
   })

@@ -10,6 +10,19 @@ import type { CheckpointReason } from '../../shared/types/history'
 import { CHECKPOINT_INTERVAL_MS, checkpointsToPrune } from '../../shared/history/checkpoint-retention'
 import { useDatabase } from './database'
 
+/**
+ * Runs history work inside a savepoint of the writer's transaction: history that fails (a full disk, a bug) is
+ * logged and rolled back alone, and never undoes the save, restore or merge it belongs to.
+ */
+export async function withoutRisk<T>(transaction: Transaction, what: string, work: (t: Transaction) => Promise<T>): Promise<T | null> {
+  try {
+    return await useDatabase().transaction({ transaction }, work)
+  } catch (error) {
+    console.warn(`[history] ${what}: no checkpoint written (${(error as Error).message})`)
+    return null
+  }
+}
+
 export interface CheckpointInput {
   networkId: string
   document: NetworkDocument

@@ -218,6 +218,20 @@ describe('history checkpoints', () => {
     expect(left.size).toBe(4)
   })
 
+  it('a checkpoint that cannot be written never undoes the save it belongs to', async () => {
+    const networkId = await newNetwork('History refused')
+    // Only this network's checkpoints are refused, so tests running beside this one are untouched.
+    await db.query(`ALTER TABLE network_checkpoints ADD CONSTRAINT refuse_one_network CHECK (network_id <> '${networkId}') NOT VALID`)
+    try {
+      const saved = await save(editor.client, networkId, setImpedance(39))
+      expect(impedanceOf((await network(networkId)).document)).toBe(39)
+      expect((await network(networkId)).revision).toBe(saved.revision)
+      expect(await checkpoints(networkId)).toEqual([])
+    } finally {
+      await db.query('ALTER TABLE network_checkpoints DROP CONSTRAINT refuse_one_network')
+    }
+  })
+
   it('a checkpoint of another network, or a malformed id, answers 404', async () => {
     const a = await newNetwork('History A')
     const b = await newNetwork('History B')

@@ -21,11 +21,11 @@ export default defineEventHandler(async (event) => {
     if (result[0] > 0) {
       await liveDocumentSaved(existing.id, document, user.id, transaction)
       // History: every save is a checkpoint; what it replaced is kept too when no checkpoint holds it yet.
-      await checkpointWrite({
+      await withoutRisk(transaction, `network ${existing.id} after a save`, t => checkpointWrite({
         networkId: existing.id,
         replaced: existing.revision === body.revision ? { document: existing.document, revision: existing.revision, updatedBy: existing.updatedBy } : null,
         written: { document, revision: body.revision + 1, reason: 'save', by: user.id },
-      }, transaction)
+      }, t))
     }
     return result
   })

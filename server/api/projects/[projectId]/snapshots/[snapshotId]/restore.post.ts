@@ -35,11 +35,11 @@ export default defineEventHandler(async (event): Promise<RestoreResultDto> => {
     await live.update({ document, revision: live.revision + 1, updatedBy: user.id }, { transaction })
     // Open live editors take the restored document in as an update, in the same transaction as the restore.
     await liveDocumentSaved(network.id, document, user.id, transaction)
-    await checkpointWrite({
+    await withoutRisk(transaction, `network ${network.id} after a snapshot restore`, t => checkpointWrite({
       networkId: network.id,
       replaced: { document: kept.document, revision: kept.networkRevision, updatedBy: replacedBy },
       written: { document, revision: live.revision, reason: 'snapshot-restore', by: user.id },
-    }, transaction)
+    }, t))
     return { kept, revision: live.revision, document }
   })
   if (!('kept' in outcome)) {

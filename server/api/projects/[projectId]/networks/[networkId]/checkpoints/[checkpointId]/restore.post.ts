@@ -25,10 +25,10 @@ export default defineEventHandler(async (event): Promise<CheckpointRestoreResult
     const document = { ...checkpoint.document, name: live.document.name ?? live.name }
     await live.update({ document, revision: live.revision + 1, updatedBy: user.id }, { transaction })
     await liveDocumentSaved(network.id, document, user.id, transaction)
-    const written = await checkpointWrite({
+    const written = await withoutRisk(transaction, `network ${network.id} after a checkpoint restore`, t => checkpointWrite({
       networkId: network.id, replaced, written: { document, revision: live.revision, reason: 'checkpoint-restore', by: user.id },
-    }, transaction)
-    return { revision: live.revision, keptId: written.keptId, document }
+    }, t))
+    return { revision: live.revision, keptId: written?.keptId ?? null, document }
   })
   if (!('document' in outcome)) {
     throw createError({
