@@ -55,6 +55,9 @@ describe('history in a real browser', () => {
     await page.getByTestId('checkpoint-restore').click()
     await page.getByTestId('checkpoint-restore-confirm').click()
     await page.getByTestId('history-outcome').getByText(`Restored as revision ${latest + 1}`).waitFor()
+    // The page moves to the newest checkpoint, the restored version, which is now the live network.
+    await page.getByTestId('checkpoint-same').waitFor()
+    await page.getByText(`live at revision ${latest + 1}`).waitFor()
     await screenshot(page, 'history-2-restored')
 
     const now = (await person.client.get(`${base}/networks/${networkId}`)).body
