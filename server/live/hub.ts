@@ -89,7 +89,7 @@ export class LiveHub {
     await room.leave(peer)
     if (room.peers.size > 0 || this.rooms.get(room.networkId) !== room) return
     this.rooms.delete(room.networkId)
-    const done = room.settle().then(() => room.merge()).finally(() => {
+    const done = room.settle().then(() => room.merge({ final: true })).finally(() => {
       room.destroy()
       if (this.closing.get(room.networkId) === done) this.closing.delete(room.networkId)
     })
@@ -148,7 +148,7 @@ export class LiveHub {
     this.rooms.clear()
     await Promise.all(rooms.map(async (room) => {
       await room.settle()
-      await room.merge()
+      await room.merge({ final: true })
       room.destroy()
     }))
     await Promise.all([...this.closing.values()])

@@ -303,15 +303,15 @@ export class LiveRoom {
     }, this.options.mergeDelayMs)
   }
 
-  /** Folds the log into the stored state and updates the JSON document; one merge at a time per room. */
-  merge(): Promise<void> {
+  /** Folds the log into the stored state and updates the JSON document; one merge at a time per room. `final`: the session ends (history keeps a checkpoint). */
+  merge(options: { final?: boolean } = {}): Promise<void> {
     if (this.mergeTimer) {
       clearTimeout(this.mergeTimer)
       this.mergeTimer = null
     }
     this.merging = this.merging.then(async () => {
       try {
-        await mergeLiveState(this.networkId)
+        await mergeLiveState(this.networkId, options)
       } catch (error) {
         console.warn(`[live] network ${this.networkId}: merge failed: ${(error as Error).message}`)
       }

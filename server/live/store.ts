@@ -10,6 +10,7 @@ import { networkToYDoc, writeNetwork } from '../../shared/live/network-ydoc'
 import { readNetworkStrict } from '../../shared/live/strict-read'
 import type { NetworkDocument } from '../../shared/network/types'
 import { useDatabase } from '../utils/database'
+import { checkpointAfterMerge, withoutRisk } from '../utils/checkpoints'
 
 /** Channel of "an update was stored": payload `<networkId> <updateId> <instanceId>`. */
 export const UPDATE_CHANNEL = 'portwright_live_update'
@@ -85,9 +86,10 @@ export interface MergeResult {
  * a new revision when the document changed, all in one transaction. The state
  * row is locked, so merges of one network from several instances take turns;
  * only the rows read here are deleted, so an update committed meanwhile stays
- * in the log for the next merge.
+ * in the log for the next merge. The merge also keeps the network's history
+ * (server/utils/checkpoints.ts); `final` is the last merge of a live session.
  */
-export async function mergeLiveState(networkId: string): Promise<MergeResult> {
+export async function mergeLiveState(networkId: string, options: { final?: boolean } = {}): Promise<MergeResult> {
   return useDatabase().transaction(async (transaction) => {
     const db = useDatabase()
     const states = await db.query<{ state: Buffer }>('SELECT state FROM network_live_states WHERE network_id = $1 FOR UPDATE', { bind: [networkId], type: QueryTypes.SELECT, transaction })
@@ -110,12 +112,26 @@ export async function mergeLiveState(networkId: string): Promise<MergeResult> {
     }
     doc.destroy()
     const lastAuthor = [...updates].reverse().find(u => u.userId)?.userId ?? null
+    const before = await db.query<{ document: NetworkDocument, revision: number, updated_by: string | null }>(
+      'SELECT document, revision, updated_by FROM networks WHERE id = $1 FOR UPDATE', { bind: [networkId], type: QueryTypes.SELECT, transaction },
+    )
     const changed = await db.query<{ revision: number }>(
       `UPDATE networks SET document = $2::jsonb, name = COALESCE(NULLIF($3, ''), name), revision = revision + 1,
          updated_by = COALESCE($4, updated_by), updated_at = now()
        WHERE id = $1 AND document IS DISTINCT FROM $2::jsonb RETURNING revision`,
       { bind: [networkId, JSON.stringify(parsed.document), (parsed.document.name ?? '').slice(0, 200), lastAuthor], type: QueryTypes.SELECT, transaction },
     )
+    if (before.length) {
+      const authors = [...new Set(updates.map(u => u.userId).filter((id): id is string => !!id))]
+      await withoutRisk(transaction, `network ${networkId} after a live merge`, t => checkpointAfterMerge({
+        networkId,
+        document: parsed.document,
+        revision: changed[0]?.revision ?? before[0]!.revision,
+        replaced: changed.length ? { document: before[0]!.document, revision: before[0]!.revision, updatedBy: before[0]!.updated_by } : null,
+        authors,
+        final: options.final ?? false,
+      }, t))
+    }
     return { merged: updates.length, revision: changed[0]?.revision ?? null, invalid: false }
   })
 }

@@ -164,3 +164,29 @@ export function passwordChangedMail(input: { name: string; how: 'changed' | 'res
   ], { url: input.resetUrl, label: 'Set a new password' })
   return { subject, text, html }
 }
+
+/** What each role may do, in a sentence for the notice of being added. */
+const roleAbilities: Record<ProjectRole, string> = {
+  owner: 'you can change its networks, freeze and review them, and manage its members',
+  editor: 'you can change its networks, freeze snapshots and ask for reviews',
+  reviewer: 'you can read its networks, comment on snapshots and decide on reviews you are asked for',
+  viewer: 'you can read its networks, snapshots and reviews',
+}
+
+export function memberAddedMail(input: {
+  adderName: string; projectName: string; role: ProjectRole; url: string
+}): MailContent {
+  const subject = `You were added to “${input.projectName}” on Portwright`
+  const text = [
+    `${input.adderName} added you to the project “${input.projectName}” on Portwright as ${input.role}: ${roleAbilities[input.role]}.`,
+    '',
+    `Open the project: ${input.url}`,
+    '',
+    'Nothing else is needed; it is already in your list of projects. If you did not expect this, ask the person who added you, or another owner of the project, to remove you.',
+  ].join('\n')
+  const html = frame([
+    p(`${escapeHtml(input.adderName)} added you to the project <strong>“${escapeHtml(input.projectName)}”</strong> on Portwright as <strong>${input.role}</strong>: ${roleAbilities[input.role]}.`),
+    p('Nothing else is needed; it is already in your list of projects.'),
+  ], { url: input.url, label: 'Open the project' }, ['If you did not expect this, ask the person who added you, or another owner of the project, to remove you.'])
+  return { subject, text, html }
+}

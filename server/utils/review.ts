@@ -5,7 +5,7 @@ import type { NetworkDocument } from '../../shared/network/types'
 import type {
   CommentAnchor, CommentDto, PersonDto, ReviewDto, SnapshotListItemDto, SnapshotSummary,
 } from '../../shared/types/review'
-import { findMentions } from '../../shared/review/mentions'
+import { findMentions, findUnmatchedMentions, type UnmatchedMention } from '../../shared/review/mentions'
 import { formatHz } from '../../shared/review/summary-lines'
 import { mentionMail } from '../mail/messages'
 import { listMembers } from './members'
@@ -148,8 +148,13 @@ export const appPaths = {
 
 /** Members a comment body mentions, other than its author. */
 export async function mentionedMembers(projectId: string, body: string, authorId: string): Promise<string[]> {
-  const members = await listMembers(projectId)
-  return findMentions(body, members.map(m => ({ id: m.userId, email: m.email }))).filter(id => id !== authorId)
+  return (await readMentions(projectId, body, authorId)).mentioned
+}
+
+/** Members a comment body mentions (other than its author), and the mentions that matched no single member. */
+export async function readMentions(projectId: string, body: string, authorId: string): Promise<{ mentioned: string[]; unmatched: UnmatchedMention[] }> {
+  const members = (await listMembers(projectId)).map(m => ({ id: m.userId, email: m.email }))
+  return { mentioned: findMentions(body, members).filter(id => id !== authorId), unmatched: findUnmatchedMentions(body, members) }
 }
 
 /** Mails each mentioned member once, with the comment and a link to its thread. */
@@ -168,4 +173,19 @@ export async function mailMentions(event: H3Event, input: {
       authorName: input.author.name, projectName: input.project.name, snapshotTitle: input.snapshot.title, where, body: input.comment.body, url,
     }))
   }
+}
+
+/** The 422 that asks the user to confirm freezing or sending for review a network that does not solve. */
+export function unsolvedRefusal(what: 'network' | 'snapshot', problem: string | undefined) {
+  const reason = (problem ?? 'the solver could not solve it').replace(/\.+$/, '')
+  return createError({
+    statusCode: 422,
+    message: `This ${what} does not solve: ${reason}. ${what === 'network' ? 'Freeze it anyway' : 'Send it for review anyway'} only if that is what you want looked at.`,
+    data: { unsolved: { problem: reason } },
+  })
+}
+
+/** Audit detail naming a summary's problem when it did not solve; empty when it did. */
+export function unsolvedDetail(summary: SnapshotSummary): Record<string, unknown> {
+  return summary.solved ? {} : { unsolved: summary.problem ?? 'not solved' }
 }

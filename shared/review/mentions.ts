@@ -34,3 +34,35 @@ export function mentionHandle(member: MentionCandidate, members: readonly Mentio
   const shared = members.filter(m => m.email.split('@')[0]!.toLowerCase() === local).length > 1
   return `@${shared ? member.email : local}`
 }
+
+/** A mention that reached nobody: no member has that handle, or several share it. */
+export interface UnmatchedMention {
+  /** As typed, with its "@". */
+  handle: string
+  reason: 'nobody' | 'several'
+}
+
+/**
+ * The mentions of a comment that matched no single member, once each in order of
+ * appearance, so the author learns that nobody was told. Mentions are read exactly
+ * as `findMentions` reads them.
+ */
+export function findUnmatchedMentions(body: string, members: readonly MentionCandidate[]): UnmatchedMention[] {
+  const emails = new Set(members.map(m => m.email.toLowerCase()))
+  const locals = new Map<string, number>()
+  for (const m of members) {
+    const local = m.email.toLowerCase().split('@')[0]!
+    locals.set(local, (locals.get(local) ?? 0) + 1)
+  }
+  const out: UnmatchedMention[] = []
+  const seen = new Set<string>()
+  for (const match of body.matchAll(MENTION)) {
+    const typed = match[2]!.replace(/\.+$/, '')
+    const handle = typed.toLowerCase()
+    if (!handle || seen.has(handle)) continue
+    seen.add(handle)
+    const count = handle.includes('@') ? (emails.has(handle) ? 1 : 0) : (locals.get(handle) ?? 0)
+    if (count !== 1) out.push({ handle: `@${typed}`, reason: count === 0 ? 'nobody' : 'several' })
+  }
+  return out
+}

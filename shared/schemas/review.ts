@@ -9,6 +9,8 @@ export const createSnapshotSchema = z.object({
   title: z.string().trim().min(1, 'Give the snapshot a title.').max(200, 'Title is too long (200 characters at most).'),
   note: z.string().trim().max(5000, 'Note is too long (5000 characters at most).').default(''),
   revision: z.number().int().positive().optional(),
+  /** false: refuse (422, nothing stored) when the network does not solve, so the caller can ask the user to confirm. */
+  allowUnsolved: z.boolean().default(true),
 })
 
 /** Where a comment points; a band needs low < high, both positive frequencies in Hz. */
@@ -38,6 +40,8 @@ export const updateCommentSchema = z.object({
 export const requestReviewSchema = z.object({
   reviewerIds: z.array(uuid('Each reviewer id')).min(1, 'Choose at least one reviewer.').max(50, 'Too many reviewers (50 at most).'),
   message: z.string().trim().max(5000, 'Message is too long (5000 characters at most).').default(''),
+  /** false: refuse (422, nothing stored) when the snapshot does not solve, so the caller can ask the user to confirm. */
+  allowUnsolved: z.boolean().default(true),
 })
 
 /** Body of a reviewer's decision. */

@@ -2,9 +2,11 @@ import type { NetworkDocument } from '../network/types'
 import type { ProjectRole } from './api'
 import type { SnapshotSummary } from '../review/snapshot-summary'
 import type { DocumentDiff } from '../review/document-diff'
+import type { UnmatchedMention } from '../review/mentions'
 
 export type { SnapshotSummary } from '../review/snapshot-summary'
 export type { DocumentDiff, DiffEntry } from '../review/document-diff'
+export type { UnmatchedMention } from '../review/mentions'
 
 /**
  * A review's state. Ours: waiting for the chosen reviewers, cleared by all of them,
@@ -87,6 +89,8 @@ export interface CommentDto {
   createdAt: string
   updatedAt: string
   edited: boolean
+  /** Only in the answer to posting or editing: mentions that matched no single member, so nobody was told. */
+  unmatchedMentions?: UnmatchedMention[]
 }
 
 export interface ReviewerDto {

@@ -1,5 +1,6 @@
 import { beforeAll, describe, expect, it } from 'vitest'
 import { ApiClient, newSignedInUser, signedIn } from '../support/http'
+import { mailDuring } from '../support/mail'
 
 describe('health', () => {
   it('reports the app and a really queried database as ok', async () => {
@@ -91,5 +92,25 @@ describe('demo data', () => {
     expect(beam.role).toBe('owner')
     const networks = await ines.get(`/api/projects/${beam.id}/networks`)
     expect(networks.body.length).toBeGreaterThanOrEqual(3)
+  })
+})
+
+describe('notice to a member added by e-mail', () => {
+  it('mails the new member (only them) who added them, to which project and role, with a link', async () => {
+    const owner = await newSignedInUser('Notice Owner')
+    const added = await newSignedInUser('Notice Added')
+    const bystander = await newSignedInUser('Notice Bystander')
+    const projectId = (await owner.client.post('/api/projects', { name: 'Notice bench' })).body.id
+    let status = 0
+    const mail = await mailDuring([owner.email, added.email, bystander.email], async () => {
+      status = (await owner.client.post(`/api/projects/${projectId}/members`, { email: added.email, role: 'reviewer' })).status
+    })
+    expect(status).toBe(201)
+    expect(mail).toHaveLength(1)
+    expect(mail[0]!.to).toEqual([added.email])
+    expect(mail[0]!.subject).toBe('You were added to “Notice bench” on Portwright')
+    expect(mail[0]!.text).toContain('Notice Owner added you to the project “Notice bench” on Portwright as reviewer')
+    expect(mail[0]!.text).toContain(`/projects/${projectId}`)
+    expect(mail[0]!.html).toContain(`/projects/${projectId}"`)
   })
 })

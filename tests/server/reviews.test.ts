@@ -244,3 +244,62 @@ describe('reviews, comments and their e-mail', () => {
     expect((await editor.client.get(`${base}/audit`)).status).toBe(403)
   })
 })
+
+describe('reviews waiting for me, mentions of nobody, and networks that do not solve', () => {
+  it('lists, across projects, the reviews waiting for the caller\'s own decision, until they decide', async () => {
+    const waitingFor = async (who: Person) => {
+      const answer = await who.client.get('/api/reviews/waiting')
+      expect(answer.status).toBe(200)
+      return answer.body as Array<{ reviewId: string; projectId: string; projectName: string; networkId: string; snapshotId: string; snapshotTitle: string; requestedBy: { name: string } }>
+    }
+    const snap = await snapshot('Rev W waiting')
+    const review = (await editor.client.post(`${base}/snapshots/${snap.id}/reviews`, { reviewerIds: [r1.id, r2.id] })).body
+    const r1Sees = (await waitingFor(r1)).find(w => w.reviewId === review.id)
+    expect(r1Sees).toMatchObject({ projectId, projectName: 'Review bench', networkId, snapshotId: snap.id, snapshotTitle: 'Rev W waiting', requestedBy: { name: 'Eamon Editor' } })
+    expect((await waitingFor(r2)).map(w => w.reviewId)).toContain(review.id)
+    for (const other of [owner, editor, viewer]) expect((await waitingFor(other)).map(w => w.reviewId)).not.toContain(review.id)
+    await r1.client.post(`${base}/reviews/${review.id}/decision`, { decision: 'clear' })
+    expect((await waitingFor(r1)).map(w => w.reviewId)).not.toContain(review.id)
+    expect((await waitingFor(r2)).map(w => w.reviewId)).toContain(review.id)
+    // A reviewer who lost the role to decide no longer sees it waiting.
+    await owner.client.patch(`${base}/members/${r2.id}`, { role: 'viewer' })
+    expect((await waitingFor(r2)).map(w => w.reviewId)).not.toContain(review.id)
+    await owner.client.patch(`${base}/members/${r2.id}`, { role: 'reviewer' })
+    await editor.client.post(`${base}/reviews/${review.id}/withdraw`, {})
+    expect((await waitingFor(r2)).map(w => w.reviewId)).not.toContain(review.id)
+  })
+
+  it('a comment answers which mentions matched nobody, and mails only the members it did match', async () => {
+    const snap = await snapshot('Rev M mentions')
+    const handle = editor.email.split('@')[0]
+    let answer: Awaited<ReturnType<ApiClient['post']>> | undefined
+    const mail = await mailDuring(everyone, async () => {
+      answer = await r1.client.post(`${base}/snapshots/${snap.id}/comments`, { body: `@${handle} and @priya-not-here, look at T12.` })
+    })
+    expect(answer!.status, JSON.stringify(answer!.body)).toBe(201)
+    expect(answer!.body.unmatchedMentions).toEqual([{ handle: '@priya-not-here', reason: 'nobody' }])
+    expect(mail.map(m => m.to)).toEqual([[editor.email]])
+    const edited = await r1.client.patch(`${base}/comments/${answer!.body.id}`, { body: 'Also @ghost@nowhere.example' })
+    expect(edited.body.unmatchedMentions).toEqual([{ handle: '@ghost@nowhere.example', reason: 'nobody' }])
+  })
+
+  it('a network that does not solve: freezing or asking for review with allowUnsolved false answers 422 naming the problem; confirmed, it goes through', async () => {
+    const broken = (await editor.client.post(`${base}/networks`, { name: 'Does not solve', document: { ...branchLineHybrid, blocks: [], wires: [] } })).body.id
+    const refused = await editor.client.post(`${base}/networks/${broken}/snapshots`, { title: 'Broken', allowUnsolved: false })
+    expect(refused.status).toBe(422)
+    expect(refused.body.message).toMatch(/^This network does not solve: .+\. Freeze it anyway/)
+    expect(refused.body.data.unsolved.problem).toEqual(expect.any(String))
+    expect((await editor.client.get(`${base}/networks/${broken}/snapshots`)).body).toEqual([])
+    const frozen = await editor.client.post(`${base}/networks/${broken}/snapshots`, { title: 'Broken' })
+    expect(frozen.status).toBe(201)
+    expect(frozen.body.summary).toMatchObject({ solved: false, problem: refused.body.data.unsolved.problem })
+    const notSent = await editor.client.post(`${base}/snapshots/${frozen.body.id}/reviews`, { reviewerIds: [r1.id], allowUnsolved: false })
+    expect(notSent.status).toBe(422)
+    expect(notSent.body.message).toMatch(/^This snapshot does not solve: .+\. Send it for review anyway/)
+    const sent = await editor.client.post(`${base}/snapshots/${frozen.body.id}/reviews`, { reviewerIds: [r1.id], allowUnsolved: true })
+    expect(sent.status).toBe(201)
+    const audit = (await owner.client.get(`${base}/audit`)).body as Array<{ action: string; detail: Record<string, unknown> }>
+    expect(audit.find(e => e.action === 'snapshot.created' && e.detail.snapshotId === frozen.body.id)?.detail.unsolved).toBe(refused.body.data.unsolved.problem)
+    expect(audit.find(e => e.action === 'review.requested' && e.detail.snapshotId === frozen.body.id)?.detail.unsolved).toBe(refused.body.data.unsolved.problem)
+  })
+})

@@ -173,6 +173,20 @@ const policy: Record<string, RouteCase> = {
   'GET /api/v1/token': { rule: 'token', prepare: async () => ({ path: '/api/v1/token' }) },
   'GET /api/v1/networks': { rule: 'token-viewer', prepare: async f => ({ path: `/api/v1/networks?project=${f.projectId}` }) },
   'POST /api/v1/solve': { rule: 'token-viewer', prepare: async f => ({ path: '/api/v1/solve', body: { project: f.projectId, document: matchedLoad } }) },
+  'GET /api/reviews/waiting': { rule: 'signed-in', prepare: async () => ({ path: '/api/reviews/waiting' }) },
+  'GET /api/projects/:projectId/networks/:networkId/checkpoints': { rule: 'viewer', prepare: async f => ({ path: `/api/projects/${f.projectId}/networks/${f.networkId}/checkpoints` }) },
+  'GET /api/projects/:projectId/networks/:networkId/checkpoints/:checkpointId': {
+    rule: 'viewer',
+    prepare: async f => ({ path: `/api/projects/${f.projectId}/networks/${f.networkId}/checkpoints/${await newestCheckpoint(f)}` }),
+  },
+  'POST /api/projects/:projectId/networks/:networkId/checkpoints/:checkpointId/restore': {
+    rule: 'editor',
+    prepare: async (f) => {
+      const checkpointId = await newestCheckpoint(f)
+      const current = await f.owner.get(`/api/projects/${f.projectId}/networks/${f.networkId}`)
+      return { path: `/api/projects/${f.projectId}/networks/${f.networkId}/checkpoints/${checkpointId}/restore`, body: { revision: current.body.revision } }
+    },
+  },
   'DELETE /api/projects/:projectId/networks/:networkId': {
     rule: 'editor',
     prepare: async (f) => {
@@ -199,6 +213,13 @@ async function throwawayProject(f: Fixture): Promise<string> {
     await f.owner.post(`/api/projects/${made.body.id}/members`, { email, role })
   }
   return made.body.id
+}
+
+/** The matrix network's newest history checkpoint, after a save by the owner makes sure there is one. */
+async function newestCheckpoint(f: Fixture): Promise<string> {
+  const current = await f.owner.get(`/api/projects/${f.projectId}/networks/${f.networkId}`)
+  await f.owner.put(`/api/projects/${f.projectId}/networks/${f.networkId}`, { revision: current.body.revision, document: current.body.document })
+  return (await f.owner.get(`/api/projects/${f.projectId}/networks/${f.networkId}/checkpoints`)).body[0].id
 }
 
 /** A fresh snapshot of the matrix network (a snapshot takes one open review at a time). */

@@ -15,9 +15,10 @@ export function describeAuditEvent(e: AuditEventDto): string {
     case 'member.removed': return `removed ${who} (${text(d.role)})`
     case 'network.created': return `created the network “${text(d.name)}”`
     case 'network.deleted': return `deleted the network “${text(d.name)}”`
-    case 'snapshot.created': return `froze revision ${text(d.revision)} as the snapshot “${text(d.title)}”`
+    case 'snapshot.created': return `froze revision ${text(d.revision)} as the snapshot “${text(d.title)}”${d.unsolved ? ` (it does not solve: ${text(d.unsolved)})` : ''}`
     case 'snapshot.restored': return `restored the snapshot “${text(d.title)}” as the live network (revision ${text(d.revision)})`
-    case 'review.requested': return `asked ${Array.isArray(d.reviewerIds) ? d.reviewerIds.length : 'some'} member(s) to review “${text(d.title)}”`
+    case 'checkpoint.restored': return `restored the history checkpoint of ${text(d.checkpointAt).slice(0, 16).replace('T', ' ')} UTC as the live network (revision ${text(d.revision)})`
+    case 'review.requested': return `asked ${Array.isArray(d.reviewerIds) ? d.reviewerIds.length : 'some'} member(s) to review “${text(d.title)}”${d.unsolved ? ` (it does not solve: ${text(d.unsolved)})` : ''}`
     case 'review.decided': return `${reviewDecisionLabels[d.decision as ReviewDecision] ?? text(d.decision)} in the review of “${text(d.title)}”; it is now ${(reviewStateLabels[d.state as ReviewState] ?? text(d.state)).toLowerCase()}`
     case 'review.withdrawn': return 'withdrew a review'
     case 'invitation.sent': return `invited ${text(d.email)} as ${text(d.role)}`

@@ -18,12 +18,14 @@ import { AccountSession } from './AccountSession'
 import { PasswordReset } from './PasswordReset'
 import { AccessToken } from './AccessToken'
 import { AccessTokenProject } from './AccessTokenProject'
+import { NetworkCheckpoint } from './NetworkCheckpoint'
 
 export { User, Project, Membership, Network, Snapshot, Comment, StoredFile, AuditEvent }
 export { Invitation, Review, ReviewReviewer, ReviewEvent, OutboxMessage }
 export { NetworkLiveState, NetworkUpdate }
 export { AccountSession, PasswordReset }
 export { AccessToken, AccessTokenProject }
+export { NetworkCheckpoint }
 
 /** Binds every model to one Sequelize instance. */
 export function setupModels(sequelize: Sequelize): void {
@@ -34,4 +36,5 @@ export function setupModels(sequelize: Sequelize): void {
   for (const model of [NetworkLiveState, NetworkUpdate]) model.setup(sequelize)
   for (const model of [AccountSession, PasswordReset]) model.setup(sequelize)
   for (const model of [AccessToken, AccessTokenProject]) model.setup(sequelize)
+  NetworkCheckpoint.setup(sequelize)
 }

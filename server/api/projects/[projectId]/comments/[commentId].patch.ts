@@ -1,5 +1,5 @@
 import { updateCommentSchema } from '../../../../../shared/schemas/review'
-import type { CommentDto } from '../../../../../shared/types/review'
+import type { CommentDto, UnmatchedMention } from '../../../../../shared/types/review'
 
 /**
  * Edits a comment's words (its author only) or resolves / reopens a thread (reviewers and
@@ -16,8 +16,11 @@ export default defineEventHandler(async (event): Promise<CommentDto> => {
     throw createError({ statusCode: 400, message: 'Resolve or reopen the thread\'s first comment; a reply is not a thread.', data: { fields: { resolved: 'Not a thread.' } } })
   }
   let newlyMentioned: string[] = []
+  let unmatched: UnmatchedMention[] = []
   if (body.body !== undefined && body.body !== comment.body) {
-    const mentions = await mentionedMembers(project.id, body.body, user.id)
+    const read = await readMentions(project.id, body.body, user.id)
+    const mentions = read.mentioned
+    unmatched = read.unmatched
     newlyMentioned = mentions.filter(id => !(comment.mentions ?? []).includes(id))
     comment.set({ body: body.body, mentions, editedAt: new Date() })
   }
@@ -25,5 +28,5 @@ export default defineEventHandler(async (event): Promise<CommentDto> => {
   if (body.resolved === false && comment.resolvedAt) comment.set({ resolvedAt: null, resolvedBy: null })
   await comment.save()
   await mailMentions(event, { project, network, snapshot, comment, author: user, mentioned: newlyMentioned })
-  return (await toCommentDtos([comment]))[0]!
+  return { ...(await toCommentDtos([comment]))[0]!, unmatchedMentions: unmatched }
 })

@@ -1,7 +1,8 @@
 import { addMemberSchema } from '../../../../../shared/schemas/project'
 import { Membership, User } from '../../../../database/models'
+import { memberAddedMail } from '../../../../mail/messages'
 
-/** Adds an existing account to the project by e-mail (owners). */
+/** Adds an existing account to the project by e-mail (owners); the new member gets a notice by e-mail. */
 export default defineEventHandler(async (event) => {
   const { user, project } = await requireProjectRole(event, 'owner')
   const body = await readBodyAs(event, addMemberSchema)
@@ -15,6 +16,8 @@ export default defineEventHandler(async (event) => {
   }
   await Membership.create({ projectId: project.id, userId: invitee.id, role: body.role })
   await recordAudit('member.added', user.id, project.id, { userId: invitee.id, role: body.role })
+  // Sent after the membership is stored; a failed send is logged by sendMail and never undoes it.
+  await sendMail(invitee.email, memberAddedMail({ adderName: user.name, projectName: project.name, role: body.role, url: appLink(event, `/projects/${project.id}`) }))
   setResponseStatus(event, 201)
   return { userId: invitee.id, email: invitee.email, name: invitee.name, role: body.role }
 })

@@ -3,7 +3,8 @@ import { Network } from '../../../../database/models'
 
 /**
  * Replaces the document (owners and editors). The caller sends the revision its
- * edit was based on; a stale revision answers 409 and stores nothing.
+ * edit was based on; a stale revision answers 409 and stores nothing. Every
+ * save is a history checkpoint.
  */
 export default defineEventHandler(async (event) => {
   const { user, project, role } = await requireProjectRole(event, 'editor')
@@ -17,7 +18,15 @@ export default defineEventHandler(async (event) => {
       { document, name: document.name || existing.name, revision: body.revision + 1, updatedBy: user.id },
       { where: { id: existing.id, revision: body.revision }, returning: true, transaction },
     )
-    if (result[0] > 0) await liveDocumentSaved(existing.id, document, user.id, transaction)
+    if (result[0] > 0) {
+      await liveDocumentSaved(existing.id, document, user.id, transaction)
+      // History: every save is a checkpoint; what it replaced is kept too when no checkpoint holds it yet.
+      await withoutRisk(transaction, `network ${existing.id} after a save`, t => checkpointWrite({
+        networkId: existing.id,
+        replaced: existing.revision === body.revision ? { document: existing.document, revision: existing.revision, updatedBy: existing.updatedBy } : null,
+        written: { document, revision: body.revision + 1, reason: 'save', by: user.id },
+      }, t))
+    }
     return result
   })
   if (count === 0) {

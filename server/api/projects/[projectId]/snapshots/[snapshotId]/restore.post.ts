@@ -7,7 +7,7 @@ import type { NetworkDocument } from '../../../../../../shared/network/types'
  * Makes a snapshot's document the live network again (owners and editors). Like a save it
  * carries the revision the caller has seen, so newer work is never overwritten (409). What
  * it replaces is first frozen as a snapshot of its own, so a restore can itself be undone
- * by restoring that one.
+ * by restoring that one. History keeps a checkpoint of both.
  */
 export default defineEventHandler(async (event): Promise<RestoreResultDto> => {
   const { user, project } = await requireProjectRole(event, 'editor')
@@ -31,9 +31,15 @@ export default defineEventHandler(async (event): Promise<RestoreResultDto> => {
     }, { transaction })
     // The name stays the network's: a snapshot of an older name should not rename it.
     const document = { ...snapshot.document, name: live.document.name ?? live.name }
+    const replacedBy = live.updatedBy
     await live.update({ document, revision: live.revision + 1, updatedBy: user.id }, { transaction })
     // Open live editors take the restored document in as an update, in the same transaction as the restore.
     await liveDocumentSaved(network.id, document, user.id, transaction)
+    await withoutRisk(transaction, `network ${network.id} after a snapshot restore`, t => checkpointWrite({
+      networkId: network.id,
+      replaced: { document: kept.document, revision: kept.networkRevision, updatedBy: replacedBy },
+      written: { document, revision: live.revision, reason: 'snapshot-restore', by: user.id },
+    }, t))
     return { kept, revision: live.revision, document }
   })
   if (!('kept' in outcome)) {

@@ -5,7 +5,9 @@ import type { SnapshotDto } from '../../../../../../../shared/types/review'
 /**
  * Freezes the network as saved now (owners and editors): title, note, the full document
  * and its solver summary. With `revision`, a network saved since then answers 409, so
- * nobody freezes a version other than the one on their screen.
+ * nobody freezes a version other than the one on their screen. A network that does not
+ * solve is frozen all the same, its problem kept in the summary and the audit trail, unless
+ * `allowUnsolved: false` asks to be told first (422 naming the problem, nothing stored).
  */
 export default defineEventHandler(async (event): Promise<SnapshotDto> => {
   const { user, project, role } = await requireProjectRole(event, 'editor')
@@ -22,6 +24,7 @@ export default defineEventHandler(async (event): Promise<SnapshotDto> => {
     })
   }
   const summary = await summariseDocument(project.id, network.document)
+  if (!summary.solved && !body.allowUnsolved) throw unsolvedRefusal('network', summary.problem)
   const snapshot = await Snapshot.create({
     networkId: network.id,
     title: body.title,
@@ -31,7 +34,7 @@ export default defineEventHandler(async (event): Promise<SnapshotDto> => {
     networkRevision: network.revision,
     createdBy: user.id,
   })
-  await recordAudit('snapshot.created', user.id, project.id, { snapshotId: snapshot.id, networkId: network.id, title: snapshot.title, revision: network.revision })
+  await recordAudit('snapshot.created', user.id, project.id, { snapshotId: snapshot.id, networkId: network.id, title: snapshot.title, revision: network.revision, ...unsolvedDetail(summary) })
   setResponseStatus(event, 201)
   const [item] = await snapshotListItems([snapshot])
   return { ...item!, projectId: project.id, networkName: network.name, document: snapshot.document, role }

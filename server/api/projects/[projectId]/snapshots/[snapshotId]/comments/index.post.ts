@@ -5,7 +5,7 @@ import type { CommentAnchor, CommentDto } from '../../../../../../../shared/type
 /**
  * Adds a comment or a reply (reviewers and up). A new thread is anchored to the snapshot,
  * one of its blocks or a frequency band; a reply joins its thread and takes its anchor.
- * Mentioned members get an e-mail.
+ * Mentioned members get an e-mail; the answer names the mentions that matched no single member.
  */
 export default defineEventHandler(async (event): Promise<CommentDto> => {
   const { user, project } = await requireProjectRole(event, 'reviewer')
@@ -20,12 +20,12 @@ export default defineEventHandler(async (event): Promise<CommentDto> => {
   } else if (anchor.kind === 'block' && !snapshot.document.blocks.some(b => b.id === (anchor as { blockId: string }).blockId)) {
     throw createError({ statusCode: 400, message: `The snapshot has no block named ${anchor.blockId}.`, data: { fields: { 'anchor.blockId': 'No such block in this snapshot.' } } })
   }
-  const mentions = await mentionedMembers(project.id, body.body, user.id)
+  const { mentioned: mentions, unmatched } = await readMentions(project.id, body.body, user.id)
   const comment = await Comment.create({
     snapshotId: snapshot.id, parentId: body.parentId ?? null, authorId: user.id, body: body.body,
     anchor: anchor as unknown as Record<string, unknown>, resolvedAt: null, mentions,
   })
   await mailMentions(event, { project, network, snapshot, comment, author: user, mentioned: mentions })
   setResponseStatus(event, 201)
-  return (await toCommentDtos([comment]))[0]!
+  return { ...(await toCommentDtos([comment]))[0]!, unmatchedMentions: unmatched }
 })

@@ -7,13 +7,16 @@ import type { ReviewDto, SnapshotSummary } from '../../../../../../../shared/typ
 
 /**
  * Asks chosen members to review a snapshot (owners and editors). Each must hold the
- * reviewer role or higher; each gets an e-mail with the snapshot's key figures.
+ * reviewer role or higher; each gets an e-mail with the snapshot's key figures. With
+ * `allowUnsolved: false`, a snapshot that does not solve answers 422 naming its problem.
  */
 export default defineEventHandler(async (event): Promise<ReviewDto> => {
   const { user, project } = await requireProjectRole(event, 'editor')
   const body = await readBodyAs(event, requestReviewSchema)
   const { snapshot, network } = await requireSnapshot(event, project.id)
   const reviewerIds = [...new Set(body.reviewerIds)]
+  const snapshotSummary = snapshot.summary as unknown as SnapshotSummary
+  if (!snapshotSummary.solved && !body.allowUnsolved) throw unsolvedRefusal('snapshot', snapshotSummary.problem)
   if (reviewerIds.includes(user.id)) {
     throw createError({ statusCode: 400, message: 'Ask someone else: you cannot review your own request.', data: { fields: { reviewerIds: 'You are the requester.' } } })
   }
@@ -36,7 +39,7 @@ export default defineEventHandler(async (event): Promise<ReviewDto> => {
     await ReviewEvent.create({ reviewId: created.id, actorId: user.id, kind: 'requested', note: body.message }, { transaction })
     return created
   })
-  await recordAudit('review.requested', user.id, project.id, { reviewId: review.id, snapshotId: snapshot.id, title: snapshot.title, reviewerIds })
+  await recordAudit('review.requested', user.id, project.id, { reviewId: review.id, snapshotId: snapshot.id, title: snapshot.title, reviewerIds, ...unsolvedDetail(snapshotSummary) })
   const url = appLink(event, appPaths.snapshot(project.id, network.id, snapshot.id))
   const summary = summaryLines(snapshot.summary as unknown as SnapshotSummary)
   for (const id of reviewerIds) {
