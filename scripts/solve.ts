@@ -4,22 +4,10 @@
  * A bad document exits with status 2, one problem per line on standard error, nothing on standard output.
  */
 import { parseArgs } from 'node:util'
-import { prepareNetwork, resolveSweep, solveNetwork, sweepFrequencies, type SolveResult } from '../shared/solver/index'
+import { prepareNetwork, resolveSweep, solveNetwork, sweepFrequencies } from '../shared/solver/index'
+import { sParametersJson } from '../shared/touchstone/s-json'
 import { writeTouchstone } from '../shared/touchstone/write'
 import { cliPrepareOptions, fail, readDocument, sweepOverride } from './network-cli'
-
-function toJson(result: SolveResult): string {
-  const n = result.ports
-  const s = Array.from(result.frequencies, (_, k) =>
-    Array.from({ length: n }, (_, i) => Array.from({ length: n }, (_, j) => {
-      const at = (k * n + i) * n + j
-      return [result.re[at]!, result.im[at]!]
-    })))
-  return JSON.stringify({ ports: n, impedances: result.impedances, frequencies: Array.from(result.frequencies), s })
-}
-
-// Exported results travel without the app's footer, so they carry the caution themselves.
-const SAFETY_NOTE = 'Simulated results: verify hardware by measurement. High RF power can injure; follow local exposure and licensing rules.'
 
 function main(): void {
   let parsed
@@ -47,8 +35,8 @@ function main(): void {
   for (const warning of solved.warnings) process.stderr.write(`warning: ${warning.message}\n`)
   const name = prepared.network.document.name
   const output = format === 'json'
-    ? `${toJson(solved.result)}\n`
-    : writeTouchstone(solved.result, { comments: [`Portwright solve${name ? `: ${name}` : ''}`, `${solved.result.ports} ports, ${solved.result.frequencies.length} frequencies`, SAFETY_NOTE] })
+    ? `${sParametersJson(solved.result)}\n`
+    : writeTouchstone(solved.result, { comments: [`Portwright solve${name ? `: ${name}` : ''}`, `${solved.result.ports} ports, ${solved.result.frequencies.length} frequencies`], caution: true })
   process.stdout.write(output)
 }
 
