@@ -45,7 +45,8 @@ export function readVersion1(lines: readonly SourceLine[], knownPorts: number | 
     const first = rows[at]!
     const hz = first.values[0]! * multiplier
     // Two-port noise data follows the network data; its first frequency does not rise.
-    if (blocks.length && ports === 2 && hz <= previous && first.values.length === 5) break
+    // A falling line of a whole network row is out of order instead, and is reported so.
+    if (blocks.length && ports === 2 && hz <= previous && first.values.length !== count) break
     if (blocks.length >= TOUCHSTONE_LIMITS.frequencies) throw new TouchstoneError(first.line, `more than ${TOUCHSTONE_LIMITS.frequencies.toLocaleString('en-GB')} frequencies`)
     const { block, next } = gatherFrequency(rows, at, count, ports)
     blocks.push(block)

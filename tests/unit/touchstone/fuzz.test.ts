@@ -42,7 +42,7 @@ function mutate(text: string, random: () => number): string {
   return out
 }
 
-describe('seeded fuzzing of the Touchstone reader', () => {
+describe('seeded fuzzing of the Touchstone reader', { timeout: 120_000 }, () => {
   it('10 000 mutations of valid files: TouchstoneError or a sane result, nothing else', () => {
     const random = seededRandom(20261202)
     let refused = 0
