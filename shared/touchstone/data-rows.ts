@@ -1,6 +1,6 @@
 import { formatQuantity } from '../network/format-quantity'
 import { TouchstoneError } from './error'
-import { numberAt, words, type SourceLine } from './lines'
+import { numbersOf, type SourceLine } from './lines'
 
 /** A line of numbers. */
 export interface DataRow {
@@ -10,7 +10,7 @@ export interface DataRow {
 
 /** Reads a line of whitespace-separated numbers; any other word is an error naming it. */
 export function dataRow(source: SourceLine): DataRow {
-  return { line: source.line, values: words(source.text).map(w => numberAt(w, source.line)) }
+  return { line: source.line, values: numbersOf(source.text, source.line) }
 }
 
 /** One frequency's numbers gathered from one or more lines; `line` is where it starts. */

@@ -61,3 +61,31 @@ export function isNumberWord(word: string): boolean {
 export function clip(word: string): string {
   return word.length > 24 ? `${word.slice(0, 24)}…` : word
 }
+
+/**
+ * Reads a line of whitespace-separated decimal numbers in one pass (the hot loop of a large file):
+ * words of digits, signs, points and exponents only, each reading as a finite number.
+ */
+export function numbersOf(text: string, line: number): number[] {
+  const values: number[] = []
+  const length = text.length
+  let at = 0
+  while (at < length) {
+    let code = text.charCodeAt(at)
+    if (code === 32 || code === 9) { at++; continue }
+    const start = at
+    let plain = true
+    while (at < length) {
+      code = text.charCodeAt(at)
+      if (code === 32 || code === 9) break
+      // 0-9 + - . e E
+      if (!((code >= 48 && code <= 57) || code === 43 || code === 45 || code === 46 || code === 101 || code === 69)) plain = false
+      at++
+    }
+    const word = text.slice(start, at)
+    const value = plain ? Number(word) : Number.NaN
+    if (!Number.isFinite(value)) values.push(numberAt(word, line))
+    else values.push(value)
+  }
+  return values
+}
