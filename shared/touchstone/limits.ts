@@ -7,4 +7,6 @@ export const TOUCHSTONE_LIMITS = {
   noiseFrequencies: 100_001,
   /** Characters on one line; a longer line is not a Touchstone line. */
   lineCharacters: 65_536,
+  /** Bytes of one file uploaded to a project (stated beside the upload button). */
+  uploadBytes: 8 * 1024 * 1024,
 } as const

@@ -3,6 +3,7 @@ import * as m0001 from './0001-accounts-projects-networks'
 import * as m0002 from './0002-snapshots-comments-files'
 import * as m0003 from './0003-reviews-invitations-mail'
 import * as m0004 from './0004-live-document-updates'
+import * as m0007 from './0007-file-versions'
 
 export interface MigrationStep {
   name: string
@@ -16,4 +17,5 @@ export const migrations: MigrationStep[] = [
   { name: '0002-snapshots-comments-files', ...m0002 },
   { name: '0003-reviews-invitations-mail', ...m0003 },
   { name: '0004-live-document-updates', ...m0004 },
+  { name: '0007-file-versions', ...m0007 },
 ]
