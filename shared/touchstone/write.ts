@@ -4,7 +4,7 @@ import { FREQUENCY_UNITS, type FrequencyUnit, type NoisePoint, type NumberFormat
 /** S-parameters in the solver's layout: S(i+1)(j+1) at frequency k at index (k·ports + i)·ports + j. */
 export interface TouchstoneData {
   ports: number
-  impedances: number[]
+  impedances: readonly number[]
   frequencies: Float64Array | number[]
   re: Float64Array | number[]
   im: Float64Array | number[]

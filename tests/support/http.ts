@@ -78,7 +78,7 @@ export async function signedIn(email: string, password: string): Promise<ApiClie
 }
 
 /** Multipart form data with one file in the field `file`, as a browser's upload sends it. */
-export function fileForm(name: string, text: string | Uint8Array): FormData {
+export function fileForm(name: string, text: string): FormData {
   const form = new FormData()
   form.append('file', new Blob([text], { type: 'application/octet-stream' }), name)
   return form
