@@ -75,6 +75,16 @@ describe('project files', () => {
     expect((await owner.client.get(base)).body[0].version).toBe(2)
   })
 
+  it('a snapshot of a network with a data block is summarised from the project\'s file', async () => {
+    const network = await owner.client.post(`/api/projects/${projectId}/networks`, { name: 'Pad summary', document: withData('Pad summary', 'pad.s2p') })
+    const snapshot = await owner.client.post(`/api/projects/${projectId}/networks/${network.body.id}/snapshots`, { title: 'Pad' })
+    expect(snapshot.status).toBe(201)
+    expect(snapshot.body.summary.solved, JSON.stringify(snapshot.body.summary)).toBe(true)
+    // |S21| = 0.5 throughout the file: 6.02 dB of insertion loss (20·log10 2, common practice).
+    expect(JSON.stringify(snapshot.body.summary)).toMatch(/6\.02/)
+    expect((await owner.client.delete(`/api/projects/${projectId}/networks/${network.body.id}`)).status).toBe(200)
+  })
+
   it('refuses to delete a file a network uses, naming the network; deletes it once unused', async () => {
     const id = (await owner.client.get(base)).body[0].id
     const network = await owner.client.post(`/api/projects/${projectId}/networks`, { name: 'Pad test', document: withData('Pad test', 'pad.s2p') })
