@@ -36,6 +36,12 @@ describe('project files', () => {
     const list = await viewer.client.get(base)
     expect(list.status).toBe(200)
     expect(list.body.map((f: { name: string }) => f.name)).toEqual(['pad.s2p'])
+    // The project page lists it in its Files section, with the upload limit stated.
+    const page = await owner.client.get(`/projects/${projectId}`)
+    expect(page.status).toBe(200)
+    expect(page.body).toMatch(/data-testid="project-files"/)
+    expect(page.body).toMatch(/pad\.s2p/)
+    expect(page.body).toMatch(/at most 8 MiB each/)
   })
 
   it('refuses a wrong extension, content that does not read, a port count that differs from the name, a duplicate name and an oversized file', async () => {
