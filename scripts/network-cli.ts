@@ -2,11 +2,13 @@
  * What the `solve` and `bench` commands share: reading a document, loading its
  * subnetworks relative to the file that names them, sweep overrides and problem output.
  */
-import { existsSync, readFileSync } from 'node:fs'
-import { dirname, resolve } from 'node:path'
+import { existsSync, readFileSync, statSync } from 'node:fs'
+import { basename, dirname, resolve } from 'node:path'
 import { evaluateQuantity } from '../shared/network/expression'
 import type { Problem } from '../shared/network/types'
-import type { PrepareOptions, SubnetworkResolver, SweepSettings } from '../shared/solver/index'
+import type { DataResolver, DataSet, PrepareOptions, SubnetworkResolver, SweepSettings } from '../shared/solver/index'
+import { TOUCHSTONE_LIMITS } from '../shared/touchstone/limits'
+import { portsFromFileName, readTouchstone } from '../shared/touchstone/read'
 
 /** Prints one line per problem on standard error and exits with status 2; nothing goes to standard output. */
 export function fail(problems: Array<Problem | string>): never {
@@ -45,9 +47,28 @@ export function fileResolver(documentPath: string): SubnetworkResolver {
   }
 }
 
+/**
+ * Loads the Touchstone files of `data` blocks, each path relative to the folder of the document
+ * that holds the block; a file used by several blocks is read once.
+ */
+export function dataFileResolver(documentPath: string): DataResolver {
+  const read = new Map<string, DataSet>()
+  return (ref, trail) => {
+    let from = resolve(documentPath)
+    for (const step of trail) from = locate(from, step)
+    const path = resolve(dirname(from), ref)
+    const known = read.get(path)
+    if (known) return known
+    if (statSync(path).size > TOUCHSTONE_LIMITS.characters) throw new Error(`${ref} is larger than ${TOUCHSTONE_LIMITS.characters / 1024 / 1024} MiB`)
+    const data = readTouchstone(readFileSync(path, 'latin1'), { ports: portsFromFileName(basename(path)) })
+    read.set(path, data)
+    return data
+  }
+}
+
 /** How every command prepares a document read from a file: what it refers to is loaded relative to that file. */
 export function cliPrepareOptions(documentPath: string): PrepareOptions {
-  return { resolveSubnetwork: fileResolver(documentPath) }
+  return { resolveSubnetwork: fileResolver(documentPath), resolveData: dataFileResolver(documentPath) }
 }
 
 /** Turns --start/--stop/--points/--spacing into a sweep override, or fails naming the option. */

@@ -5,11 +5,9 @@
  */
 import { parseArgs } from 'node:util'
 import { prepareNetwork, resolveSweep, solveNetwork, sweepFrequencies } from '../shared/solver/index'
-import { SAFETY_NOTE } from '../shared/solver/safety-note'
-import { solveResultJson } from '../shared/solver/solve-json'
+import { solveResultJsonText } from '../shared/solver/solve-json'
 import { writeTouchstone } from '../shared/touchstone/write'
 import { cliPrepareOptions, fail, readDocument, sweepOverride } from './network-cli'
-
 
 function main(): void {
   let parsed
@@ -37,8 +35,8 @@ function main(): void {
   for (const warning of solved.warnings) process.stderr.write(`warning: ${warning.message}\n`)
   const name = prepared.network.document.name
   const output = format === 'json'
-    ? `${JSON.stringify(solveResultJson(solved.result))}\n`
-    : writeTouchstone(solved.result, { comments: [`Portwright solve${name ? `: ${name}` : ''}`, `${solved.result.ports} ports, ${solved.result.frequencies.length} frequencies`, SAFETY_NOTE] })
+    ? `${solveResultJsonText(solved.result)}\n`
+    : writeTouchstone(solved.result, { comments: [`Portwright solve${name ? `: ${name}` : ''}`, `${solved.result.ports} ports, ${solved.result.frequencies.length} frequencies`], caution: true })
   process.stdout.write(output)
 }
 

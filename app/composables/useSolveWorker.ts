@@ -7,6 +7,7 @@
 import { onBeforeUnmount, ref, shallowRef } from 'vue'
 import type { Evaluated, NetworkDocument, Problem } from '~~/shared/network/types'
 import type { SolveReply, SolvedData } from '~~/app/workers/protocol'
+import type { DataSet } from '~~/shared/solver/types'
 
 export interface SolveState {
   result: SolvedData | null
@@ -20,7 +21,17 @@ export interface SolveState {
   resultSeq: number
 }
 
-export function useSolveWorker(options: { debounceMs?: number } = {}) {
+/** File names of the document's data blocks. */
+function dataNames(document: NetworkDocument): string[] {
+  const names = new Set<string>()
+  for (const block of document.blocks ?? []) {
+    const file = (block.params as Record<string, unknown> | undefined)?.file
+    if (block.type === 'data' && typeof file === 'string') names.add(file)
+  }
+  return [...names]
+}
+
+export function useSolveWorker(options: { debounceMs?: number, loadData?: (name: string) => Promise<DataSet | undefined> } = {}) {
   const debounceMs = options.debounceMs ?? 0
   const result = shallowRef<SolvedData | null>(null)
   const stale = ref(false)
@@ -34,8 +45,13 @@ export function useSolveWorker(options: { debounceMs?: number } = {}) {
   let inFlight = false
   let pending: NetworkDocument | null = null
   let timer: ReturnType<typeof setTimeout> | undefined
+  // Data sets loaded for data blocks (null: not found, tried again on the next edit) and those the worker has.
+  const loaded = new Map<string, DataSet | null>()
+  const workerHas = new Set<string>()
+  let loading = false
 
   function start(): Worker {
+    workerHas.clear()
     const w = new Worker(new URL('../workers/solve.worker.ts', import.meta.url), { type: 'module' })
     w.onmessage = (event: MessageEvent<SolveReply>) => receive(event.data)
     w.onerror = (event) => {
@@ -50,13 +66,28 @@ export function useSolveWorker(options: { debounceMs?: number } = {}) {
   }
 
   function send() {
-    if (!pending || inFlight) return
+    if (!pending || inFlight || loading) return
+    const names = options.loadData ? dataNames(pending) : []
+    const missing = names.filter(name => !loaded.has(name))
+    if (missing.length) {
+      // Load first, then send the newest document; a failed load is reported by the solver as not found.
+      loading = true
+      busy.value = true
+      Promise.all(missing.map(name => options.loadData!(name).then(data => loaded.set(name, data ?? null), () => loaded.set(name, null))))
+        .finally(() => { loading = false; send() })
+      return
+    }
     worker ??= start()
     const document = pending
     pending = null
     inFlight = true
     busy.value = true
-    worker.postMessage({ seq: ++latest, document })
+    const dataSets: Record<string, DataSet> = {}
+    for (const name of names) {
+      const data = loaded.get(name)
+      if (data && !workerHas.has(name)) { dataSets[name] = data; workerHas.add(name) }
+    }
+    worker.postMessage({ seq: ++latest, document, ...(Object.keys(dataSets).length ? { dataSets } : {}) })
   }
 
   function receive(reply: SolveReply) {
@@ -78,6 +109,7 @@ export function useSolveWorker(options: { debounceMs?: number } = {}) {
 
   /** Ask for a solve of this document. */
   function request(document: NetworkDocument) {
+    for (const [name, data] of loaded) if (data === null) loaded.delete(name)
     pending = document
     clearTimeout(timer)
     if (debounceMs > 0) timer = setTimeout(send, debounceMs)

@@ -1,9 +1,12 @@
 /** Messages between the editor and its solve worker. */
 import type { Evaluated, NetworkDocument, Problem } from '../../shared/network/types'
+import type { DataSet } from '../../shared/solver/types'
 
 export interface SolveRequest {
   seq: number
   document: NetworkDocument
+  /** Data sets of `data` blocks by file name, sent once each; the worker keeps them. */
+  dataSets?: Record<string, DataSet>
 }
 
 /** The S-parameters as the worker sends them (arrays are transferred, not copied). */

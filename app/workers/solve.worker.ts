@@ -1,14 +1,18 @@
 /// <reference lib="webworker" />
 // Solves documents off the main thread so the canvas never waits for the sweep.
 import { JoinPlanCache, prepareNetwork, resolveSweep, solveNetwork, sweepFrequencies } from '../../shared/solver'
+import type { DataSet } from '../../shared/solver/types'
 import type { SolveReply, SolveRequest } from './protocol'
 
 // Edits mostly change parameter values, not the join structure, so the join-order search is kept across requests.
 const plans = new JoinPlanCache()
+// Data sets of data blocks, by file name, as the editor sent them.
+const dataSets = new Map<string, DataSet>()
 
 function solve(request: SolveRequest): { reply: SolveReply, transfer: Transferable[] } {
   const t0 = performance.now()
-  const prepared = prepareNetwork(request.document, { plans })
+  for (const [name, data] of Object.entries(request.dataSets ?? {})) dataSets.set(name, data)
+  const prepared = prepareNetwork(request.document, { plans, resolveData: name => dataSets.get(name) })
   const base = { seq: request.seq, evaluated: prepared.evaluated ?? null }
   if (!prepared.ok) return { reply: { ...base, problems: prepared.problems, result: null, solveMs: performance.now() - t0 }, transfer: [] }
   const sweep = resolveSweep(prepared.network.sweep)

@@ -4,8 +4,13 @@
  * running count and refused the moment it passes the limit, and what was read is kept for the route.
  */
 import type { H3Event } from 'h3'
+import { TOUCHSTONE_LIMITS } from '../../shared/touchstone/limits'
 
 const BODY_METHODS = new Set(['POST', 'PUT', 'PATCH', 'DELETE'])
+
+// File uploads (and replacements) of a project carry up to the upload limit plus the multipart framing.
+const UPLOAD_PATH = /^\/api\/projects\/[^/]+\/files(?:\/[^/]+)?\/?(?:\?.*)?$/
+const UPLOAD_FRAMING = 64 * 1024
 
 /** Largest request body accepted, in bytes (PORTWRIGHT_BODY_LIMIT_BYTES, default 2 MiB). */
 export function bodyLimitBytes(): number {
@@ -40,7 +45,8 @@ function readWithin(event: H3Event, limit: number): Promise<Buffer> {
 
 export default defineEventHandler(async (event) => {
   if (!BODY_METHODS.has(event.method)) return
-  const limit = bodyLimitBytes()
+  const upload = (event.method === 'POST' || event.method === 'PUT') && UPLOAD_PATH.test(event.path)
+  const limit = upload ? Math.max(bodyLimitBytes(), TOUCHSTONE_LIMITS.uploadBytes + UPLOAD_FRAMING) : bodyLimitBytes()
   const declared = getRequestHeader(event, 'content-length')
   if (declared !== undefined) {
     if (!/^\d+$/.test(declared) || Number(declared) > limit) throw tooLarge(limit)

@@ -1,6 +1,6 @@
 import type { H3Event } from 'h3'
 import { z } from 'zod'
-import { Comment, Network, Review, ReviewEvent, ReviewReviewer, Snapshot, User, type Project } from '../database/models'
+import { Comment, Network, Review, ReviewEvent, ReviewReviewer, Snapshot, StoredFile, User, type Project } from '../database/models'
 import type { NetworkDocument } from '../../shared/network/types'
 import type {
   CommentAnchor, CommentDto, PersonDto, ReviewDto, SnapshotListItemDto, SnapshotSummary,
@@ -57,8 +57,17 @@ export async function summariseDocument(projectId: string, document: NetworkDocu
     byRef.set(n.id, n.document)
     if (!byRef.has(n.name)) byRef.set(n.name, n.document)
   }
+  // Only the files that some data block names travel to the worker.
+  const named = new Set<string>()
+  for (const doc of [document, ...networks.map(n => n.document)]) {
+    for (const block of doc.blocks ?? []) {
+      const file = (block.params as Record<string, unknown> | undefined)?.file
+      if (block.type === 'data' && typeof file === 'string') named.add(file)
+    }
+  }
+  const files = named.size ? await StoredFile.findAll({ where: { projectId, name: [...named] }, attributes: ['name', 'data'] }) : []
   // Solved in the worker pool with a time and memory budget, never on the event loop every team shares.
-  return summariseInPool({ document, networks: [...byRef] })
+  return summariseInPool({ document, networks: [...byRef], files: files.map(f => [f.name, f.data.toString('latin1')]) })
 }
 
 /** List entries for snapshots, with their latest review and open comment threads. */

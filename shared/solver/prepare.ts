@@ -11,15 +11,25 @@ import { CompiledNetwork, type CompileBlock } from './compile'
 import type { JoinOrder } from './join-order'
 import type { JoinPlanCache } from './plan-cache'
 import type { SweepSettings } from './sweep'
-import type { CreateContext, NestedNetwork } from './types'
+import { resolveDataSet } from './resolve-data'
+import type { CreateContext, DataSet, NestedNetwork } from './types'
 
 /** Loads the document a `subnetwork` block refers to; `trail` lists the references from the top document down. */
 export type SubnetworkResolver = (ref: string, trail: readonly string[]) => unknown
+
+/**
+ * Loads the data set a `data` block refers to (a parsed Touchstone file, say); `trail` lists the
+ * subnetwork references from the top document down to the one holding the block. May throw a
+ * TouchstoneError (reported with its line) or any error (reported by its message).
+ */
+export type DataResolver = (ref: string, trail: readonly string[]) => DataSet | undefined
 
 /** Options of `prepareNetwork`. */
 export interface PrepareOptions {
   /** Loads subnetwork documents by reference; without it subnetwork blocks are a problem. */
   resolveSubnetwork?: SubnetworkResolver
+  /** Loads data sets of `data` blocks by reference; without it data blocks are a problem. */
+  resolveData?: DataResolver
   /** Join order: 'auto' (greedy, the default), 'document' or 'random' (with `seed`); for tests. */
   joinOrder?: JoinOrder
   seed?: number
@@ -86,6 +96,7 @@ function prepareAt(input: unknown, options: PrepareOptions, trail: readonly stri
     referenceImpedance,
     buildNetwork: (doc, label) => nested(prepareAt(doc, { ...options, joinOrder: 'auto' }, trail, budget), label),
     resolveNetwork: ref => resolve(ref, options, trail, budget),
+    resolveData: ref => resolveDataSet(ref, options.resolveData, trail),
   })
 
   const compileBlocks: CompileBlock[] = []

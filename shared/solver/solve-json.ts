@@ -1,4 +1,11 @@
-import type { SolveResult } from './solve'
+/** S-parameters in the solver's layout (a solve, or a Touchstone file read back): S(i+1)(j+1) at (k·ports + i)·ports + j. */
+export interface SolveJsonSource {
+  ports: number
+  impedances: ArrayLike<number>
+  frequencies: ArrayLike<number>
+  re: ArrayLike<number>
+  im: ArrayLike<number>
+}
 
 /** The contract's JSON form of a solve: `s[k][i][j]` = S(i+1)(j+1) at `frequencies[k]`, each as [re, im]. */
 export interface SolveJson {
@@ -9,9 +16,9 @@ export interface SolveJson {
 }
 
 /** A solve result in the contract's JSON shape (`solve --format json`, `POST /api/v1/solve`). */
-export function solveResultJson(result: SolveResult): SolveJson {
+export function solveResultJson(result: SolveJsonSource): SolveJson {
   const n = result.ports
-  const s = Array.from(result.frequencies, (_, k) =>
+  const s = Array.from({ length: result.frequencies.length }, (_, k) =>
     Array.from({ length: n }, (_, i) => Array.from({ length: n }, (_, j): [number, number] => {
       const at = (k * n + i) * n + j
       return [result.re[at]!, result.im[at]!]
@@ -23,7 +30,7 @@ export function solveResultJson(result: SolveResult): SolveJson {
  * The same text as `JSON.stringify(solveResultJson(result))`, written piece by piece so that a large answer
  * never exists twice as nested arrays (the server builds it inside a solve worker's heap budget).
  */
-export function solveResultJsonText(result: SolveResult): string {
+export function solveResultJsonText(result: SolveJsonSource): string {
   const n = result.ports
   const num = (x: number) => JSON.stringify(x)
   const rows: string[] = []

@@ -40,6 +40,18 @@ export interface NestedNetwork {
   failure(): Problem | undefined
 }
 
+/** S-parameters sampled over frequency, as a `data` block uses them (a read Touchstone file is one). */
+export interface DataSet {
+  ports: number
+  /** Reference impedance of each port (Ω, real, > 0). */
+  impedances: readonly number[]
+  /** Hz, strictly increasing, at least one. */
+  frequencies: Float64Array
+  /** S(i+1)(j+1) at frequency k at index (k·ports + i)·ports + j. */
+  re: Float64Array
+  im: Float64Array
+}
+
 /** What a block model may ask for while building its instance. */
 export interface CreateContext {
   blockId: string
@@ -48,6 +60,8 @@ export interface CreateContext {
   buildNetwork(document: unknown, label: string): { ok: true; network: NestedNetwork } | { ok: false; problems: Problem[] }
   /** Resolves and builds a subnetwork by reference, through the caller's resolver. */
   resolveNetwork(ref: string): { ok: true; network: NestedNetwork } | { ok: false; problems: Problem[] }
+  /** Loads a data set by reference, through the caller's resolver, checked for shape. */
+  resolveData(ref: string): { ok: true; data: DataSet } | { ok: false; problems: Problem[] }
 }
 
 /** Result of building a block instance. Problem messages name the field but not the block; the caller adds it. */

@@ -54,3 +54,40 @@ export interface AccountSessionDto {
   /** The session this request came with. */
   current: boolean
 }
+
+/** What an uploaded Touchstone file holds, read when it was stored. */
+export interface StoredFileSummary {
+  ports: number
+  /** Hz. */
+  startFrequency: number
+  stopFrequency: number
+  points: number
+  /** Reference impedance of each port (Ω). */
+  impedances: number[]
+  /** As written in the file: version, parameter and number format, e.g. "1, S, MA". */
+  version: string
+  parameter: string
+  format: string
+  noisePoints: number
+}
+
+/** An uploaded data file of a project, as the Files list shows it. */
+export interface StoredFileDto {
+  id: string
+  name: string
+  size: number
+  version: number
+  summary: StoredFileSummary
+  uploadedBy: string | null
+  uploadedAt: string
+}
+
+/** A file's S-parameters for the solver: frequencies (Hz) and S in the solver's layout, as plain arrays. */
+export interface StoredFileDataDto {
+  name: string
+  ports: number
+  impedances: number[]
+  frequencies: number[]
+  re: number[]
+  im: number[]
+}

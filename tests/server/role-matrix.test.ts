@@ -1,7 +1,7 @@
 import { readdirSync, statSync } from 'node:fs'
 import { join, relative } from 'node:path'
 import { beforeAll, describe, expect, it } from 'vitest'
-import { ApiClient, newSignedInUser, signedIn, TEST_PASSWORD } from '../support/http'
+import { ApiClient, fileForm, newSignedInUser, signedIn, TEST_PASSWORD } from '../support/http'
 import { invitationToken, mailDuring, outboxList, resetToken } from '../support/mail'
 
 /**
@@ -86,6 +86,12 @@ const policy: Record<string, RouteCase> = {
       return { path: `/api/projects/${f.projectId}/networks/${f.networkId}`, body: { revision: current.body.revision, document: networkDoc('Matrix network') } }
     },
   },
+  'GET /api/projects/:projectId/files': { rule: 'viewer', prepare: async f => ({ path: `/api/projects/${f.projectId}/files` }) },
+  'POST /api/projects/:projectId/files': { rule: 'editor', prepare: async f => ({ path: `/api/projects/${f.projectId}/files`, body: fileForm(`matrix-${crypto.randomUUID().slice(0, 8)}.s1p`, TOUCHSTONE_ONE_PORT) }) },
+  'GET /api/projects/:projectId/files/:fileId': { rule: 'viewer', prepare: async f => ({ path: `/api/projects/${f.projectId}/files/${await uploadedFile(f)}` }) },
+  'GET /api/projects/:projectId/files/:fileId/data': { rule: 'viewer', prepare: async f => ({ path: `/api/projects/${f.projectId}/files/${await uploadedFile(f)}/data` }) },
+  'PUT /api/projects/:projectId/files/:fileId': { rule: 'editor', prepare: async f => ({ path: `/api/projects/${f.projectId}/files/${await uploadedFile(f)}`, body: fileForm('replacement.s1p', TOUCHSTONE_ONE_PORT) }) },
+  'DELETE /api/projects/:projectId/files/:fileId': { rule: 'editor', prepare: async f => ({ path: `/api/projects/${f.projectId}/files/${await uploadedFile(f)}` }) },
   'GET /api/admin/outbox': { rule: 'admin', prepare: async () => ({ path: '/api/admin/outbox' }) },
   'GET /api/admin/outbox/:messageId': { rule: 'admin', prepare: async () => ({ path: `/api/admin/outbox/${(await outboxList())[0]!.id}` }) },
   'GET /api/invitations/:token': { rule: 'public', prepare: async f => ({ path: `/api/invitations/${(await invitation(f, f.projectId)).token}` }) },
@@ -202,6 +208,15 @@ async function projectOf(f: Fixture, actor: Actor): Promise<string> {
   if (actor === 'viewer' || actor === 'reviewer' || actor === 'editor' || actor === 'owner' || actor === 'anonymous' || actor === 'token') return f.projectId
   if (!ownProjects.has(actor)) ownProjects.set(actor, (await f.clients[actor].post('/api/projects', { name: `Own project of ${actor}` })).body.id)
   return ownProjects.get(actor)!
+}
+
+// A one-port Touchstone 1.1 file of our own (a 25 Ω load in a 50 Ω system), for the file routes.
+const TOUCHSTONE_ONE_PORT = '! Quillmere matrix load\n# GHZ S RI R 50\n1 -0.3333333333 0\n2 -0.3333333333 0\n'
+
+/** A fresh file of the matrix project (each call its own, so deleting one leaves the others). */
+async function uploadedFile(f: Fixture): Promise<string> {
+  const answer = await f.owner.request('POST', `/api/projects/${f.projectId}/files`, fileForm(`fixture-${crypto.randomUUID().slice(0, 8)}.s1p`, TOUCHSTONE_ONE_PORT))
+  return answer.body.id
 }
 
 /** A second project with the same members, for calls that delete a project. */

@@ -31,10 +31,11 @@ export class ApiClient {
         'x-forwarded-for': this.address,
         ...(this.cookie ? { cookie: this.cookie } : {}),
         ...(this.origin && method !== 'GET' ? { origin: this.origin } : {}),
-        ...(body !== undefined ? { 'content-type': 'application/json' } : {}),
+        // FormData sets its own multipart content type with the boundary.
+        ...(body !== undefined && !(body instanceof FormData) ? { 'content-type': 'application/json' } : {}),
         ...headers,
       },
-      body: body === undefined ? undefined : JSON.stringify(body),
+      body: body === undefined ? undefined : body instanceof FormData ? body : JSON.stringify(body),
     })
     const setCookie = response.headers.getSetCookie()
     for (const line of setCookie) {
@@ -74,4 +75,11 @@ export async function signedIn(email: string, password: string): Promise<ApiClie
   const answer = await client.post('/api/auth/signin', { email, password })
   if (answer.status !== 200) throw new Error(`sign-in failed for ${email}: ${answer.status} ${JSON.stringify(answer.body)}`)
   return client
+}
+
+/** Multipart form data with one file in the field `file`, as a browser's upload sends it. */
+export function fileForm(name: string, text: string): FormData {
+  const form = new FormData()
+  form.append('file', new Blob([text], { type: 'application/octet-stream' }), name)
+  return form
 }

@@ -5,6 +5,7 @@ import * as m0003 from './0003-reviews-invitations-mail'
 import * as m0004 from './0004-live-document-updates'
 import * as m0005 from './0005-sessions-password-resets'
 import * as m0006 from './0006-network-checkpoints'
+import * as m0007 from './0007-file-versions'
 import * as m0008 from './0008-access-tokens'
 
 export interface MigrationStep {
@@ -21,5 +22,6 @@ export const migrations: MigrationStep[] = [
   { name: '0004-live-document-updates', ...m0004 },
   { name: '0005-sessions-password-resets', ...m0005 },
   { name: '0006-network-checkpoints', ...m0006 },
+  { name: '0007-file-versions', ...m0007 },
   { name: '0008-access-tokens', ...m0008 },
 ]

@@ -1,3 +1,4 @@
+import type { StoredFileSummary } from '../../../shared/types/api'
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize'
 
 /** An uploaded file (e.g. measured Touchstone data) kept in the database with its project. */
@@ -10,6 +11,12 @@ export class StoredFile extends Model<InferAttributes<StoredFile>, InferCreation
   declare data: Buffer
   declare createdBy: string | null
   declare createdAt: CreationOptional<Date>
+  /** 1 for the first upload, one more for each replacement. */
+  declare version: CreationOptional<number>
+  /** What the file holds, read when it was stored. */
+  declare summary: StoredFileSummary
+  declare updatedBy: string | null
+  declare updatedAt: CreationOptional<Date>
 
   static setup(sequelize: Sequelize) {
     StoredFile.init({
@@ -21,6 +28,10 @@ export class StoredFile extends Model<InferAttributes<StoredFile>, InferCreation
       data: { type: DataTypes.BLOB, allowNull: false },
       createdBy: { type: DataTypes.UUID, allowNull: true },
       createdAt: DataTypes.DATE,
-    }, { sequelize, tableName: 'files', underscored: true, updatedAt: false })
+      version: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 1 },
+      summary: { type: DataTypes.JSONB, allowNull: false },
+      updatedBy: { type: DataTypes.UUID, allowNull: true },
+      updatedAt: DataTypes.DATE,
+    }, { sequelize, tableName: 'files', underscored: true })
   }
 }

@@ -1,5 +1,6 @@
 import type { BlockModel } from '../types'
 import { attenuatorModel } from './attenuator'
+import { dataModel } from './data'
 import { dividerModel } from './divider'
 import { hybrid180Model } from './hybrid180'
 import { hybrid90Model } from './hybrid90'
@@ -25,8 +26,9 @@ export const BLOCK_MODELS: Readonly<Record<string, BlockModel>> = Object.fromEnt
     phaseModel,
     attenuatorModel,
     subnetworkModel,
+    dataModel,
   ].map(model => [model.type, model]),
 )
 
 /** Types named by the contract whose models come in a later version; documents using them get a clear problem. */
-export const LATER_BLOCK_TYPES: ReadonlySet<string> = new Set(['data', 'microstrip'])
+export const LATER_BLOCK_TYPES: ReadonlySet<string> = new Set(['microstrip'])

@@ -1,0 +1,18 @@
+import { portsFromFileName, readTouchstone } from '../../../../../../shared/touchstone/read'
+import type { StoredFileDataDto } from '../../../../../../shared/types/api'
+
+/** A data file's S-parameters for the editor's solver, read again from the stored bytes (every member). */
+export default defineEventHandler(async (event): Promise<StoredFileDataDto> => {
+  const { project } = await requireProjectRole(event, 'viewer')
+  const file = await requireStoredFile(event, project.id)
+  // It was read when stored; reading again keeps one source of truth (the bytes) and the reader's checks.
+  const parsed = readTouchstone(file.data.toString('latin1'), { ports: portsFromFileName(file.name) })
+  return {
+    name: file.name,
+    ports: parsed.ports,
+    impedances: parsed.impedances,
+    frequencies: Array.from(parsed.frequencies),
+    re: Array.from(parsed.re),
+    im: Array.from(parsed.im),
+  }
+})
