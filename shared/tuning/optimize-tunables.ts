@@ -26,16 +26,20 @@ export interface OptimizeResult {
 
 // A design that cannot be solved is worse than any that can.
 const UNSOLVABLE_GOAL = 1e12
-// First simplex step: a tenth of each range.
-const STEP = 0.1
+// First simplex step: a tenth of each range; a search that settles restarts from its best with half the
+// step, and below the smallest step jumps to a seeded random point with the first step again.
+const FIRST_STEP = 0.1
+const SMALLEST_STEP = 1e-3
 
 class Finished extends Error {}
 
 /**
  * Varies the tunables within their ranges towards meeting the spec: Nelder–Mead over coordinates folded
  * into [0, 1] of each range, minimising the spec's goal (mean squared shortfall). The first search starts
- * at the document's values (clamped into range); when a search settles short of the spec, the next starts
- * from the best design or a seeded random point, alternately. Stops when met or out of evaluations.
+ * at the document's values (clamped into range). A search ends where the simplex would shrink (fmin's
+ * shrink step cannot run in strict mode, so it is switched off with sigma = 1) or when it settles; the next
+ * starts from the best design with half the step, or from a seeded random point once the step is tiny.
+ * Stops when met or out of evaluations.
  */
 export function optimizeTunables(setup: TuningSetup, ranges: readonly TunableRange[], options: OptimizeOptions = {}): OptimizeResult {
   const maxEvaluations = options.maxEvaluations ?? 2000
@@ -61,14 +65,22 @@ export function optimizeTunables(setup: TuningSetup, ranges: readonly TunableRan
     if (best.met) throw new Finished()
     return goal
   }
-  for (let search = 0; evaluations < maxEvaluations && !best.met; search++) {
-    const origin = search === 0 ? start : search % 2 === 1 ? best.x.map(foldUnit) : start.map(() => random())
+  let origin = start
+  let step = FIRST_STEP
+  while (evaluations < maxEvaluations && !best.met) {
     // fmin steps each coordinate by a factor; shifting the origin to 1 makes that factor a fixed step.
-    const shifted = (u: number[]) => u.map((v, i) => origin[i]! + v - 1)
+    const from = origin
+    const shifted = (u: number[]) => u.map((v, i) => from[i]! + v - 1)
     try {
-      nelderMead(u => goalAt(shifted(u)), origin.map(() => 1), { nonZeroDelta: 1 + STEP, maxIterations: Number.MAX_SAFE_INTEGER })
+      nelderMead(u => goalAt(shifted(u)), from.map(() => 1), { nonZeroDelta: 1 + step, sigma: 1, maxIterations: Number.MAX_SAFE_INTEGER })
     } catch (error) {
       if (!(error instanceof Finished)) throw error
+    }
+    step /= 2
+    origin = best.x.map(foldUnit)
+    if (step < SMALLEST_STEP) {
+      step = FIRST_STEP
+      origin = start.map(() => random())
     }
   }
   return { met: best.met, evaluations, goal: best.goal, values: toValues(best.x) }
