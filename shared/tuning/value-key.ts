@@ -31,7 +31,8 @@ export function variableUnitOf(value: number | Unit): string | null {
 
 /**
  * Finds what each KEY names in a prepared document and its current value. Every problem names the
- * field (`tunables.KEY`, `tolerances.KEY`) and what is wrong with the key.
+ * field (`tunables.KEY`, `tolerances.KEY`) and what is wrong with the key; the keys that resolve are
+ * returned either way, so their values can be checked in the same pass.
  */
 export function resolveValueKeys(
   document: NetworkDocument,
@@ -39,7 +40,7 @@ export function resolveValueKeys(
   scope: Scope,
   keys: readonly string[],
   field: string,
-): { ok: true; targets: ValueTarget[] } | { ok: false; problems: Problem[] } {
+): { targets: ValueTarget[]; problems: Problem[] } {
   const problems: Problem[] = []
   const targets: ValueTarget[] = []
   const fail = (key: string, message: string) => problems.push({ field: `${field}.${key}`, message: `${field}.${key}: ${message}` })
@@ -84,5 +85,5 @@ export function resolveValueKeys(
     }
     targets.push({ key, where: { block: index, param }, unit: { kind: spec.kind }, nominal })
   }
-  return problems.length ? { ok: false, problems } : { ok: true, targets }
+  return { targets, problems }
 }
