@@ -1,0 +1,55 @@
+/**
+ * The tune and tolerance panel in a real browser: a slider per tunable that edits the document, and a
+ * yield run spread over Web Workers whose count equals the library's for the same seed.
+ */
+import { afterAll, beforeAll, describe, expect, it } from 'vitest'
+import type { Page } from 'playwright-core'
+import { branchLineTuning } from '../../shared/examples/index'
+import { prepareTuning, resolveTolerances, runTrials } from '../../shared/tuning/index'
+import { appUrl } from '../support/app'
+import { launchBrowser, screenshot, signIn } from '../support/browser'
+import { newSignedInUser, TEST_PASSWORD } from '../support/http'
+
+let page: Page
+let close: () => Promise<void>
+let networkPath = ''
+
+describe('tune and tolerance panel', () => {
+  beforeAll(async () => {
+    const { client, email } = await newSignedInUser('Tuning Tester')
+    const project = await client.post('/api/projects', { name: `Tuning ${Date.now()}` })
+    expect(project.status).toBe(201)
+    const network = await client.post(`/api/projects/${project.body.id}/networks`, { name: 'Branch-line with tolerances', document: branchLineTuning(false) })
+    expect(network.status).toBe(201)
+    networkPath = `/projects/${project.body.id}/networks/${network.body.id}`
+    const browser = await launchBrowser()
+    page = browser.page
+    close = browser.close
+    await page.setViewportSize({ width: 1500, height: 950 })
+    await signIn(page, email, TEST_PASSWORD)
+  })
+  afterAll(async () => { await close?.() })
+
+  it('runs a yield analysis in workers with the library\'s answer, and a slider edits its tunable', async () => {
+    await page.goto(appUrl(networkPath))
+    await page.click('[data-testid="open-tuning"]')
+    await page.waitForSelector('[data-testid="tune-T12.impedance"] input[type="range"]')
+    expect(await page.textContent('[data-testid="tune-T12.impedance"]')).toContain('35.36 Ω')
+
+    await page.fill('[data-testid="yield-trials"]', '60')
+    await page.fill('[data-testid="yield-seed"]', '3')
+    await page.click('[data-testid="yield-run"]')
+    await page.waitForSelector('[data-testid="yield-result"]', { timeout: 120_000 })
+    const prepared = prepareTuning(branchLineTuning(false))
+    if (!prepared.ok) throw new Error('example did not prepare')
+    const spreads = resolveTolerances(prepared.setup)
+    if (!spreads.ok) throw new Error('tolerances did not resolve')
+    const passed = runTrials(prepared.setup, spreads.spreads, { seed: 3, to: 60 }).passed
+    expect(await page.textContent('[data-testid="yield-result"]')).toContain(`(${passed} of 60, seed 3)`)
+    await screenshot(page, 'tuning-panel')
+
+    // The slider runs over 25…50 Ω in 1000 steps: step 400 is 35 Ω.
+    await page.fill('[data-testid="tune-T12.impedance"] input[type="range"]', '400')
+    await page.waitForFunction(() => document.querySelector('[data-testid="tune-T12.impedance"]')?.textContent?.includes('35 Ω'))
+  })
+})
