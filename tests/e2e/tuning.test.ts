@@ -13,6 +13,7 @@ import { newSignedInUser, TEST_PASSWORD } from '../support/http'
 let page: Page
 let close: () => Promise<void>
 let networkPath = ''
+let detunedPath = ''
 
 describe('tune and tolerance panel', () => {
   beforeAll(async () => {
@@ -22,6 +23,9 @@ describe('tune and tolerance panel', () => {
     const network = await client.post(`/api/projects/${project.body.id}/networks`, { name: 'Branch-line with tolerances', document: branchLineTuning(false) })
     expect(network.status).toBe(201)
     networkPath = `/projects/${project.body.id}/networks/${network.body.id}`
+    const detuned = await client.post(`/api/projects/${project.body.id}/networks`, { name: 'Branch-line, arms detuned', document: branchLineTuning(true) })
+    expect(detuned.status).toBe(201)
+    detunedPath = `/projects/${project.body.id}/networks/${detuned.body.id}`
     const browser = await launchBrowser()
     page = browser.page
     close = browser.close
@@ -51,5 +55,20 @@ describe('tune and tolerance panel', () => {
     // The slider runs over 25…50 Ω in 1000 steps: step 400 is 35 Ω.
     await page.fill('[data-testid="tune-T12.impedance"] input[type="range"]', '400')
     await page.waitForFunction(() => document.querySelector('[data-testid="tune-T12.impedance"]')?.textContent?.includes('35 Ω'))
+  })
+
+  it('optimises a detuned branch-line in a worker, writes the values as one undo step, and undo restores them', async () => {
+    await page.goto(appUrl(detunedPath))
+    await page.click('[data-testid="open-tuning"]')
+    await page.waitForSelector('[data-testid="tune-T12.impedance"] input[type="range"]')
+    // Arms 20 % off: 1.2 · 50/√2 = 42.43 Ω.
+    expect(await page.textContent('[data-testid="tune-T12.impedance"]')).toContain('42.43 Ω')
+    await page.click('[data-testid="optimize-run"]')
+    await page.waitForSelector('[data-testid="optimize-result"]', { timeout: 120_000 })
+    expect(await page.textContent('[data-testid="optimize-result"]')).toMatch(/^\s*The spec is met after \d+ evaluations/)
+    await page.waitForFunction(() => !document.querySelector('[data-testid="tune-T12.impedance"]')?.textContent?.includes('42.43 Ω'))
+    await page.click('[data-testid="undo"]')
+    await page.waitForFunction(() => document.querySelector('[data-testid="tune-T12.impedance"]')?.textContent?.includes('42.43 Ω'))
+    await page.waitForFunction(() => document.querySelector('[data-testid="tune-S14.impedance"]')?.textContent?.includes('40 Ω'))
   })
 })
