@@ -36,9 +36,15 @@ export function useToleranceRun() {
     workers = []
   }
 
-  /** Starts a run of `trials` designs with `seed`; a run already going is cancelled first. */
-  function start(document: NetworkDocument, options: { trials: number, seed: number, traces?: TraceSpec[] }) {
+  let settle: (outcome: ToleranceOutcome | null) => void = () => {}
+
+  /**
+   * Starts a run of `trials` designs with `seed` (only the `active` tolerances spread, when given); a run
+   * already going is cancelled first. Resolves with the outcome, or null when cancelled or failed.
+   */
+  function start(document: NetworkDocument, options: { trials: number, seed: number, traces?: TraceSpec[], active?: string[] }): Promise<ToleranceOutcome | null> {
     cancel()
+    const finishedRun = new Promise<ToleranceOutcome | null>((resolve) => { settle = resolve })
     const id = ++runId
     const parts = splitTrials(options.trials, Math.min(globalThis.navigator?.hardwareConcurrency || 2, MAX_WORKERS))
     const progress = parts.map(() => 0)
@@ -69,9 +75,10 @@ export function useToleranceRun() {
         problems.value = [{ message: `A tolerance worker stopped: ${event.message || 'unknown error'}` }]
         cancel()
       }
-      w.postMessage({ runId: id, document: plain, seed: options.seed, from: part.from, to: part.to, traces: options.traces ?? [] })
+      w.postMessage({ runId: id, document: plain, seed: options.seed, from: part.from, to: part.to, traces: options.traces ?? [], ...(options.active ? { active: options.active } : {}) })
       return w
     })
+    return finishedRun
   }
 
   function join(parts: Array<Extract<ToleranceReply, { kind: 'done' }>>, options: { trials: number, seed: number }) {
@@ -92,6 +99,8 @@ export function useToleranceRun() {
     }
     running.value = false
     stopWorkers()
+    settle(outcome.value)
+    settle = () => {}
   }
 
   /** Ends the run now; nothing from it is shown. */
@@ -99,6 +108,8 @@ export function useToleranceRun() {
     runId++
     stopWorkers()
     running.value = false
+    settle(null)
+    settle = () => {}
   }
 
   onBeforeUnmount(cancel)

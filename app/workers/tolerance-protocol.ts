@@ -9,6 +9,8 @@ export interface ToleranceRequest {
   from: number
   to: number
   traces: TraceSpec[]
+  /** Keys whose spread is drawn; absent: every tolerance. */
+  active?: string[]
 }
 
 export type ToleranceReply =

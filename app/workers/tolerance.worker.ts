@@ -17,6 +17,7 @@ function run(request: ToleranceRequest): { reply: ToleranceReply, transfer: Tran
     from: request.from,
     to: request.to,
     traces: request.traces,
+    ...(request.active ? { active: new Set(request.active) } : {}),
     onProgress: (done) => {
       const now = performance.now()
       if (now - last < PROGRESS_MS) return

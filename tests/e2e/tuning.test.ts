@@ -5,7 +5,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import type { Page } from 'playwright-core'
 import { branchLineTuning } from '../../shared/examples/index'
-import { prepareTuning, resolveTolerances, runTrials } from '../../shared/tuning/index'
+import { prepareTuning, rankTolerances, resolveTolerances, runTrials } from '../../shared/tuning/index'
 import { appUrl } from '../support/app'
 import { launchBrowser, screenshot, signIn } from '../support/browser'
 import { newSignedInUser, TEST_PASSWORD } from '../support/http'
@@ -51,6 +51,16 @@ describe('tune and tolerance panel', () => {
     const passed = runTrials(prepared.setup, spreads.spreads, { seed: 3, to: 60 }).passed
     expect(await page.textContent('[data-testid="yield-result"]')).toContain(`(${passed} of 60, seed 3)`)
     await screenshot(page, 'tuning-panel')
+
+    // Each tolerance alone over the same 60 trials, as rankTolerances does it.
+    await page.click('[data-testid="rank-run"]')
+    await page.waitForSelector('[data-testid="rank-result"]', { timeout: 120_000 })
+    const ranking = rankTolerances(prepared.setup, spreads.spreads, { seed: 3, trials: 60 })
+    const rows = await page.$$eval('[data-testid="rank-result"] tbody tr', trs => trs.map(tr => [...tr.querySelectorAll('td')].map(td => td.textContent?.trim() ?? '')))
+    // Ties may list in another order (the live document keeps its own key order), so compare key by key.
+    expect(Object.fromEntries(rows)).toEqual(Object.fromEntries(ranking.map(c => [c.key, `${(100 * c.yield).toFixed(1)} %`])))
+    const shown = rows.map(([, y]) => Number.parseFloat(y!))
+    expect(shown).toEqual([...shown].sort((a, b) => a - b))
 
     // The slider runs over 25…50 Ω in 1000 steps: step 400 is 35 Ω.
     await page.fill('[data-testid="tune-T12.impedance"] input[type="range"]', '400')
