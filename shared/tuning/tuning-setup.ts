@@ -52,7 +52,8 @@ export function prepareTuning(input: unknown, options: PrepareOptions = {}): { o
   if (!spec.band && !sweep.includes(spec.center)) sweep = Float64Array.from([...sweep, spec.center]).sort()
   const judged = specFrequencies(spec, sweep)
   if (judged.length === 0) {
-    const band = `${formatQuantity(spec.band!.start, 'frequency')} – ${formatQuantity(spec.band!.stop, 'frequency')}`
+    // Enough digits that a narrow band's ends read differently.
+    const band = `${formatQuantity(spec.band!.start, 'frequency', 8)} – ${formatQuantity(spec.band!.stop, 'frequency', 8)}`
     return { ok: false, problems: [{ field: 'spec.band', message: `spec.band: no frequency of the sweep lies inside the band ${band}; add sweep points or widen the band` }] }
   }
   const setup: TuningSetup = { document, evaluated: prepared.evaluated, variables, nominal: prepared.network, spec, sweep, judged, prepareOptions }
