@@ -13,6 +13,8 @@ export default defineConfig({
     },
   },
   test: {
+    // fmin's ES source imports its files without extensions, which Node's loader refuses; Vite resolves them.
+    server: { deps: { inline: ['fmin'] } },
     projects: [
       {
         extends: true,
