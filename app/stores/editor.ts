@@ -215,7 +215,7 @@ export const useEditorStore = defineStore('editor', () => {
   function setName(name: string) {
     edit((d) => { d.name = name }, { mergeKey: 'name' })
   }
-  function setReferenceImpedance(value: number) {
+  function setReferenceImpedance(value: ParamValue) {
     edit((d) => { d.referenceImpedance = value }, { mergeKey: 'referenceImpedance' })
   }
   function setSweep(patch: Partial<Sweep>) {
