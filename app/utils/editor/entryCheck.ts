@@ -58,7 +58,8 @@ export function entryLabel(doc: NetworkDocument, target: EntryTarget): string {
     case 'param': {
       const block = doc.blocks.find(b => b.id === target.block)
       const field = block && kindSpec(block.type)?.fields.find(f => f.param === target.param)
-      return field?.label ?? target.param
+      const label = field?.label ?? target.param
+      return label.charAt(0).toUpperCase() + label.slice(1)
     }
     case 'variable': return `Variable ${target.name}`
     case 'sweep': return SWEEP_LABELS[target.field]
@@ -94,8 +95,9 @@ function checkParam(doc: NetworkDocument, target: { block: string, param: string
   const spec = BLOCK_MODELS[block.type]?.params[target.param]
   const field = kindSpec(block.type)?.fields.find(f => f.param === target.param)
   const value = readParamInput(text)
-  // Blank clears an optional parameter (its default applies); a required one must hold a value.
-  if (value === undefined && !field?.required && !(spec && 'required' in spec && spec.required)) return { ok: true, value: undefined }
+  // Blank clears a parameter that means something when absent (a default, "none", "reference"); any other must hold a value.
+  const blankMeansSomething = !field?.required && (field?.placeholder !== undefined || (spec !== undefined && 'default' in spec && spec.default !== undefined))
+  if (value === undefined && blankMeansSomething) return { ok: true, value: undefined }
   if (!spec || spec.kind === 'choice' || spec.kind === 'text') {
     return value === undefined ? { ok: false, message: `${label} is empty: enter a value` } : { ok: true, value }
   }

@@ -124,3 +124,13 @@ describe('drafts', () => {
     expect(editor.doc.blocks[0]!.params.impedance).toBe(50)
   })
 })
+
+describe('blank entries', () => {
+  it('are refused where the block needs a value, and clear a parameter whose absence means something', () => {
+    const doc = docWithLine()
+    const at = checkEntry(doc, { kind: 'param', block: 'TL1', param: 'at' }, '')
+    expect(!at.ok && at.message).toBe('At frequency is empty: enter a value such as 2.45 GHz')
+    doc.blocks.push({ id: 'RL1', type: 'load', params: { resistance: 50 } })
+    expect(checkEntry(doc, { kind: 'param', block: 'RL1', param: 'capacitance' }, '')).toEqual({ ok: true, value: undefined })
+  })
+})
