@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest'
-import { nearestIndex, parseTraceName, phaseDifference, traceName, traceQuantity, traceSamples } from '../../../app/utils/editor/traces'
+import { allTraces, defaultTraces, nearestIndex, parseTraceName, phaseDifference, traceName, traceQuantity, traceSamples } from '../../../app/utils/editor/traces'
+import { columnTraces, gridSize, reflectionTraces, rowTraces, toggleGroup } from '../../../app/utils/editor/traceGrid'
 import { balance, worstDeviation } from '../../../app/utils/editor/balance'
 import { findBandwidth } from '~~/shared/rf'
 import { specMaskFrom } from '../../../app/utils/editor/specForm'
@@ -83,5 +84,29 @@ describe('results table', () => {
     expect(t.rows[1]![2]).toBeCloseTo(-90, 9)
     const tsv = toTsv(['a', 'b'], [[1, Number.NaN]])
     expect(tsv).toBe('a\tb\n1\t\n')
+  })
+})
+
+describe('trace grid', () => {
+  it('chooses defaults that fit the network', () => {
+    expect(defaultTraces(2)).toEqual(['S11', 'S21'])
+    expect(defaultTraces(4)).toEqual(['S11', 'S21', 'S31', 'S41'])
+    const eight = defaultTraces(8)
+    expect(eight.slice(0, 8)).toEqual(['S11', 'S22', 'S33', 'S44', 'S55', 'S66', 'S77', 'S88'])
+    expect(eight.slice(8)).toEqual(['S21', 'S31', 'S41', 'S51', 'S61', 'S71', 'S81'])
+  })
+
+  it('reads rows as "to" and columns as "from", and toggles a group in one click', () => {
+    expect(rowTraces(2, 3)).toEqual(['S21', 'S22', 'S23'])
+    expect(columnTraces(1, 3)).toEqual(['S11', 'S21', 'S31'])
+    expect(reflectionTraces(3)).toEqual(['S11', 'S22', 'S33'])
+    expect(toggleGroup(['S21'], columnTraces(1, 3))).toEqual(['S21', 'S11', 'S31'])
+    expect(toggleGroup(['S11', 'S21', 'S31', 'S22'], columnTraces(1, 3))).toEqual(['S22'])
+  })
+
+  it('recognises a full N×N set, including two-digit port names', () => {
+    expect(gridSize(allTraces(4))).toBe(4)
+    expect(gridSize(allTraces(12))).toBe(12)
+    expect(gridSize(['S11', 'S22'])).toBe(0)
   })
 })
