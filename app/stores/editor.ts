@@ -120,6 +120,9 @@ export const useEditorStore = defineStore('editor', () => {
     attach(options.source ?? createMemorySource(clean))
     readOnly.value = options.readOnly ?? false
     selection.value = { blocks: [], wires: [] }
+    // Markers belong to a network (saved under view.markers): another network starts without the last one's.
+    results.value.markers = []
+    results.value.activeMarker = null
     version.value++
     lastOrigin.value = 'replace'
   }

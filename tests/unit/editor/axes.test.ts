@@ -51,3 +51,21 @@ describe('marker readouts', () => {
     expect(deltaText('db', -3, -10)).toBe('−7.00 dB')
   })
 })
+
+describe('markers saved with the network', () => {
+  it('are written under view.markers beside other view keys and read back checked', async () => {
+    const { emptyDocument } = await import('../../../app/utils/editor/emptyDocument')
+    const { saveMarkers, savedMarkerFrequencies, MAX_SAVED_MARKERS } = await import('../../../app/utils/editor/savedMarkers')
+    const doc = emptyDocument('Markers')
+    expect(savedMarkerFrequencies(doc)).toBeNull()
+    doc.view = { zoom: 2 }
+    saveMarkers(doc, [2.45e9, 1e9])
+    expect(doc.view).toEqual({ zoom: 2, markers: [{ frequency: 2.45e9 }, { frequency: 1e9 }] })
+    expect(savedMarkerFrequencies(doc)).toEqual([2.45e9, 1e9])
+    // A hostile or damaged list: only finite, non-negative frequencies, and no more than the limit.
+    doc.view = { markers: [{ frequency: 'x' }, null, { frequency: -1 }, { frequency: 3e9 }, ...Array.from({ length: 40 }, () => ({ frequency: 1 }))] }
+    const read = savedMarkerFrequencies(doc)!
+    expect(read[0]).toBe(3e9)
+    expect(read).toHaveLength(MAX_SAVED_MARKERS)
+  })
+})
