@@ -57,7 +57,8 @@ export const useDraftsStore = defineStore('drafts', () => {
       const key = full.slice(prefix.length)
       if (entryTarget(key)) drafts.value[key] = { text: s.getItem(full) ?? '', message: '' }
     }
-    recheck()
+    // Messages only: the live document is not attached yet, and a write now would be replaced by it.
+    recheck({ write: false })
   }
 
   function draftOf(target: EntryTarget): Draft | undefined {
@@ -103,21 +104,22 @@ export const useDraftsStore = defineStore('drafts', () => {
     drop(entryKey(target))
   }
 
-  /** Check every draft against the document as it is now; those that evaluate are written. */
-  function recheck() {
-    if (editor.readOnly) return
+  /** Check every draft against the document as it is now; those that evaluate are written (unless `write` is false). */
+  function recheck(options: { write?: boolean } = {}) {
+    const writing = options.write !== false
+    if (editor.readOnly && writing) return
     for (const [key, draft] of Object.entries(drafts.value)) {
       const target = entryTarget(key)
       if (!target || !entryExists(editor.doc, target)) {
-        drop(key)
+        if (writing) drop(key)
         continue
       }
       const outcome = checkEntry(editor.doc, target, draft.text)
-      if (outcome.ok) {
+      if (outcome.ok && writing) {
         drop(key)
         write(target, outcome.value)
       }
-      else if (outcome.message !== draft.message) drafts.value = { ...drafts.value, [key]: { ...draft, message: outcome.message } }
+      else if (!outcome.ok && outcome.message !== draft.message) drafts.value = { ...drafts.value, [key]: { ...draft, message: outcome.message } }
     }
   }
 

@@ -134,3 +134,38 @@ describe('blank entries', () => {
     expect(checkEntry(doc, { kind: 'param', block: 'RL1', param: 'capacitance' }, '')).toEqual({ ok: true, value: undefined })
   })
 })
+
+describe('drafts across a reload', () => {
+  it('come back from the tab\'s session storage for the same network only, with their message', () => {
+    const items = new Map<string, string>()
+    const storage = {
+      get length() { return items.size },
+      key: (i: number) => [...items.keys()][i] ?? null,
+      getItem: (k: string) => items.get(k) ?? null,
+      setItem: (k: string, v: string) => { items.set(k, v) },
+      removeItem: (k: string) => { items.delete(k) },
+      clear: () => items.clear(),
+    }
+    ;(globalThis as { sessionStorage?: unknown }).sessionStorage = storage
+    try {
+      setActivePinia(createPinia())
+      useEditorStore().load(docWithLine())
+      useDraftsStore().open('network-a')
+      useDraftsStore().enter(impedance, 'abc')
+      expect([...items.keys()]).toEqual(['portwright:draft:network-a:block:TL1:impedance'])
+
+      // A reload: fresh stores, the same tab's storage.
+      setActivePinia(createPinia())
+      useEditorStore().load(docWithLine())
+      const drafts = useDraftsStore()
+      drafts.open('network-a')
+      expect(drafts.draftOf(impedance)).toEqual({ text: 'abc', message: 'Impedance "abc" uses the unknown name abc' })
+      expect(useEditorStore().doc.blocks[0]!.params.impedance).toBe(50)
+      drafts.open('network-b')
+      expect(drafts.draftOf(impedance)).toBeUndefined()
+    }
+    finally {
+      delete (globalThis as { sessionStorage?: unknown }).sessionStorage
+    }
+  })
+})
