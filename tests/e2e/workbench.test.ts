@@ -184,4 +184,21 @@ describe('editor workbench', () => {
     expect(saved.spec.conditions).toContainEqual({ measure: 'phaseDifference', from: 1, to: [2, 3], target: 90, tolerance: 5 })
     expect(await page.textContent('[data-testid="spec-verdict"]')).toBeTruthy()
   })
+
+  it('tells a viewer the editor is read-only instead of promising saves', async () => {
+    const networks = await api<Array<{ id: string, name: string }>>(`/api/projects/${projectId}/networks`)
+    const hybrid = networks.find(n => n.name.startsWith('Quadrature split'))!
+    const viewer = await launchBrowser()
+    try {
+      await signIn(viewer.page, 'jun@quillmere.example', 'quillmere-demo-2026')
+      await viewer.page.goto(appUrl(`/projects/${projectId}/networks/${hybrid.id}`))
+      await viewer.page.waitForSelector('[data-testid="live-status"][data-status="live"]', { timeout: 15_000 })
+      const text = await viewer.page.textContent('[data-testid="live-status"]')
+      expect(text).toContain('read-only')
+      expect(text).not.toContain('saved')
+    }
+    finally {
+      await viewer.close()
+    }
+  })
 })
