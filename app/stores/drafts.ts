@@ -104,6 +104,18 @@ export const useDraftsStore = defineStore('drafts', () => {
     drop(entryKey(target))
   }
 
+  /** A block was renamed: its drafts follow it. */
+  function renameBlock(from: string, to: string) {
+    for (const [key, draft] of Object.entries(drafts.value)) {
+      const target = entryTarget(key)
+      if (target?.kind !== 'param' || target.block !== from) continue
+      const next = entryKey({ ...target, block: to })
+      drop(key)
+      drafts.value = { ...drafts.value, [next]: draft }
+      persist(next, draft)
+    }
+  }
+
   /** Check every draft against the document as it is now; those that evaluate are written (unless `write` is false). */
   function recheck(options: { write?: boolean } = {}) {
     const writing = options.write !== false
@@ -123,5 +135,5 @@ export const useDraftsStore = defineStore('drafts', () => {
     }
   }
 
-  return { scope, drafts, open, draftOf, enter, discard, recheck }
+  return { scope, drafts, open, draftOf, enter, discard, recheck, renameBlock }
 })

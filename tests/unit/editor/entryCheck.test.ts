@@ -169,3 +169,19 @@ describe('drafts across a reload', () => {
     }
   })
 })
+
+describe('drafts follow their block', () => {
+  beforeEach(() => setActivePinia(createPinia()))
+
+  it('when it is renamed', () => {
+    const editor = useEditorStore()
+    editor.load(docWithLine())
+    const drafts = useDraftsStore()
+    drafts.enter(impedance, 'abc')
+    drafts.renameBlock('TL1', 'Arm')
+    editor.renameBlock('TL1', 'Arm')
+    drafts.recheck()
+    expect(drafts.draftOf({ kind: 'param', block: 'Arm', param: 'impedance' })?.text).toBe('abc')
+    expect(drafts.draftOf(impedance)).toBeUndefined()
+  })
+})
