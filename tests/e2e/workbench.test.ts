@@ -85,6 +85,8 @@ describe('editor workbench', () => {
 
     await page.reload()
     await page.waitForSelector('[data-testid="block-TL1"]')
+    // The live document replaces the one the page opened with (and the selection with it): wait for it.
+    await expect.poll(() => page.getAttribute('[data-testid="live-status"]', 'data-status'), { timeout: 15_000 }).toBe('live')
     await selectBlock('TL1')
     expect(await page.inputValue('[data-testid="param-impedance"]')).toBe('Zq')
     expect(await page.textContent('[data-testid="param-impedance-draft"]')).toContain('unknown name Zq')
