@@ -72,6 +72,12 @@ export const useEditorStore = defineStore('editor', () => {
     const m = results.value.markers.find(x => x.id === id)
     if (m) m.frequency = frequency
   }
+  /** Show these markers (read from the document), keeping the active one by position. */
+  function setMarkers(frequencies: readonly number[]) {
+    const at = results.value.markers.findIndex(m => m.id === results.value.activeMarker)
+    results.value.markers = frequencies.map(frequency => ({ id: ++markerIds, frequency }))
+    results.value.activeMarker = results.value.markers[Math.min(Math.max(at, 0), results.value.markers.length - 1)]?.id ?? null
+  }
   function removeMarker(id: number) {
     results.value.markers = results.value.markers.filter(m => m.id !== id)
     if (results.value.activeMarker === id) results.value.activeMarker = results.value.markers.at(-1)?.id ?? null
@@ -114,6 +120,9 @@ export const useEditorStore = defineStore('editor', () => {
     attach(options.source ?? createMemorySource(clean))
     readOnly.value = options.readOnly ?? false
     selection.value = { blocks: [], wires: [] }
+    // Markers belong to a network (saved under view.markers): another network starts without the last one's.
+    results.value.markers = []
+    results.value.activeMarker = null
     version.value++
     lastOrigin.value = 'replace'
   }
@@ -215,7 +224,7 @@ export const useEditorStore = defineStore('editor', () => {
   function setName(name: string) {
     edit((d) => { d.name = name }, { mergeKey: 'name' })
   }
-  function setReferenceImpedance(value: number) {
+  function setReferenceImpedance(value: ParamValue) {
     edit((d) => { d.referenceImpedance = value }, { mergeKey: 'referenceImpedance' })
   }
   function setSweep(patch: Partial<Sweep>) {
@@ -250,7 +259,7 @@ export const useEditorStore = defineStore('editor', () => {
   }
 
   return {
-    results, addMarker, moveMarker, removeMarker,
+    results, addMarker, moveMarker, removeMarker, setMarkers,
     doc, version, lastOrigin, history, selection, readOnly, clipboard, selectedBlocks, selectedBlock,
     load, replaceDocument, edit, select, selectAll, selectNext,
     addBlock, connect, removeWires, deleteSelection, rotateSelection, flipSelection, moveBlocks, nudgeSelection,

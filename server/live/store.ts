@@ -119,7 +119,7 @@ export async function mergeLiveState(networkId: string, options: { final?: boole
       `UPDATE networks SET document = $2::jsonb, name = COALESCE(NULLIF($3, ''), name), revision = revision + 1,
          updated_by = COALESCE($4, updated_by), updated_at = now()
        WHERE id = $1 AND document IS DISTINCT FROM $2::jsonb RETURNING revision`,
-      { bind: [networkId, JSON.stringify(parsed.document), (parsed.document.name ?? '').slice(0, 200), lastAuthor], type: QueryTypes.SELECT, transaction },
+      { bind: [networkId, JSON.stringify(parsed.document), (parsed.document.name ?? '').trim().slice(0, 200), lastAuthor], type: QueryTypes.SELECT, transaction },
     )
     if (before.length) {
       const authors = [...new Set(updates.map(u => u.userId).filter((id): id is string => !!id))]

@@ -64,6 +64,22 @@ describe('networks', () => {
     expect(now.body.updatedBy).toBe(editor.id)
   })
 
+  it('renames trimmed, never to an empty name, and refuses names over 200 characters', async () => {
+    const made = await owner.client.post(base, { name: '  Renamed feed  ', document: doc('ignored') })
+    expect(made.body.name).toBe('Renamed feed')
+    const url = `${base}/${made.body.id}`
+    const spaced = await owner.client.put(url, { revision: 1, document: doc('  Corporate feed  ') })
+    expect(spaced.status).toBe(200)
+    expect(spaced.body.name).toBe('Corporate feed')
+    const blank = await owner.client.put(url, { revision: 2, document: doc('   ') })
+    expect(blank.status).toBe(200)
+    expect(blank.body.name).toBe('Corporate feed')
+    const long = await owner.client.put(url, { revision: 3, document: doc('x'.repeat(201)) })
+    expect(long.status).toBe(422)
+    expect(long.body.message).toMatch(/200 characters/)
+    expect((await owner.client.post(base, { name: '   ' })).status).toBe(400)
+  })
+
   it('keeps the saved document when an update is invalid', async () => {
     const made = await owner.client.post(base, { name: 'Kept', document: doc('Kept') })
     const url = `${base}/${made.body.id}`

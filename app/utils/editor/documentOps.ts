@@ -5,6 +5,7 @@
 import type { BlockSpec, NetworkDocument } from '~~/shared/network/types'
 import { blockCatalog, kindSpec, terminalCount, GRID, type BlockKind, type ParamValue } from './blockCatalog'
 import { orientedSize, turn, type Rotation } from './geometry'
+import { fitDefaults } from './blockDefaults'
 
 export type Wire = [string, string]
 export interface Layout { x: number, y: number, rotation?: Rotation, flip?: boolean }
@@ -52,6 +53,7 @@ export function addBlock(doc: NetworkDocument, kind: BlockKind, at: { x: number,
   const spec = blockCatalog[kind]
   const id = freshId(spec.idPrefix, new Set(doc.blocks.map(b => b.id)))
   const params: Record<string, ParamValue> = { ...spec.defaults }
+  fitDefaults(params, doc)
   if (kind === 'port') params.index = nextPortIndex(doc)
   if (kind === 'microstrip') {
     const first = Object.keys(doc.substrates ?? {})[0]

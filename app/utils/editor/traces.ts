@@ -32,9 +32,16 @@ export function allTraces(ports: number): string[] {
   return names
 }
 
-/** A sensible first choice: input match and the transmissions from port 1. */
+/**
+ * A first choice that fits the network: up to 4 ports, everything from port 1
+ * (input match and every transmission); beyond, the reflections of every port
+ * plus the first input to every output.
+ */
 export function defaultTraces(ports: number): string[] {
-  return Array.from({ length: Math.min(ports, 4) }, (_, k) => traceName({ i: k + 1, j: 1 }, ports))
+  if (ports <= 4) return Array.from({ length: ports }, (_, k) => traceName({ i: k + 1, j: 1 }, ports))
+  const reflections = Array.from({ length: ports }, (_, k) => traceName({ i: k + 1, j: k + 1 }, ports))
+  const fromFirst = Array.from({ length: ports - 1 }, (_, k) => traceName({ i: k + 2, j: 1 }, ports))
+  return [...reflections, ...fromFirst]
 }
 
 /** Complex samples of one trace over frequency. */

@@ -1,8 +1,9 @@
 import { describe, expect, it } from 'vitest'
-import { nearestIndex, parseTraceName, phaseDifference, traceName, traceQuantity, traceSamples } from '../../../app/utils/editor/traces'
+import { allTraces, defaultTraces, nearestIndex, parseTraceName, phaseDifference, traceName, traceQuantity, traceSamples } from '../../../app/utils/editor/traces'
+import { columnTraces, gridSize, reflectionTraces, rowTraces, toggleGroup } from '../../../app/utils/editor/traceGrid'
 import { balance, worstDeviation } from '../../../app/utils/editor/balance'
 import { findBandwidth } from '~~/shared/rf'
-import { specMaskFrom } from '../../../app/utils/editor/specForm'
+import type { SpecMask } from '~~/shared/rf'
 import { resultsTable, toTsv } from '../../../app/utils/editor/resultsTable'
 import type { SolvedData } from '../../../app/workers/protocol'
 
@@ -63,14 +64,20 @@ describe('traces', () => {
 })
 
 describe('spec form', () => {
-  it('turns the form into a mask the bandwidth finder passes for the ideal hybrid and fails for a wrong phase target', () => {
+  it('the bandwidth finder passes the ideal hybrid for a 90° target and fails it for 0°', () => {
     const r = idealHybrid()
-    const form = { centre: 2.45e9, returnLossDb: 20, ports: 'all' as const, useBalance: true, from: 1, to: [2, 3] as [number, number], maxImbalanceDb: 0.5, targetPhaseDeg: 90, phaseToleranceDeg: 2 }
-    const mask = specMaskFrom(form, 4)
-    expect(mask.conditions).toHaveLength(6)
+    const mask: SpecMask = {
+      center: 2.45e9,
+      conditions: [
+        ...[1, 2, 3, 4].map(port => ({ measure: 'returnLoss' as const, port, min: 20 })),
+        { measure: 'amplitudeImbalance', from: 1, to: [2, 3], max: 0.5 },
+        { measure: 'phaseDifference', from: 1, to: [2, 3], target: 90, tolerance: 2 },
+      ],
+    }
     const band = findBandwidth(r, mask)
     expect(band.ok && [band.low, band.high]).toEqual([2e9, 3e9])
-    expect(findBandwidth(r, specMaskFrom({ ...form, targetPhaseDeg: 0 }, 4)).ok).toBe(false)
+    const wrongTarget = { ...mask, conditions: mask.conditions.map(c => c.measure === 'phaseDifference' ? { ...c, target: 0 } : c) }
+    expect(findBandwidth(r, wrongTarget).ok).toBe(false)
   })
 })
 
@@ -83,5 +90,29 @@ describe('results table', () => {
     expect(t.rows[1]![2]).toBeCloseTo(-90, 9)
     const tsv = toTsv(['a', 'b'], [[1, Number.NaN]])
     expect(tsv).toBe('a\tb\n1\t\n')
+  })
+})
+
+describe('trace grid', () => {
+  it('chooses defaults that fit the network', () => {
+    expect(defaultTraces(2)).toEqual(['S11', 'S21'])
+    expect(defaultTraces(4)).toEqual(['S11', 'S21', 'S31', 'S41'])
+    const eight = defaultTraces(8)
+    expect(eight.slice(0, 8)).toEqual(['S11', 'S22', 'S33', 'S44', 'S55', 'S66', 'S77', 'S88'])
+    expect(eight.slice(8)).toEqual(['S21', 'S31', 'S41', 'S51', 'S61', 'S71', 'S81'])
+  })
+
+  it('reads rows as "to" and columns as "from", and toggles a group in one click', () => {
+    expect(rowTraces(2, 3)).toEqual(['S21', 'S22', 'S23'])
+    expect(columnTraces(1, 3)).toEqual(['S11', 'S21', 'S31'])
+    expect(reflectionTraces(3)).toEqual(['S11', 'S22', 'S33'])
+    expect(toggleGroup(['S21'], columnTraces(1, 3))).toEqual(['S21', 'S11', 'S31'])
+    expect(toggleGroup(['S11', 'S21', 'S31', 'S22'], columnTraces(1, 3))).toEqual(['S22'])
+  })
+
+  it('recognises a full N×N set, including two-digit port names', () => {
+    expect(gridSize(allTraces(4))).toBe(4)
+    expect(gridSize(allTraces(12))).toBe(12)
+    expect(gridSize(['S11', 'S22'])).toBe(0)
   })
 })

@@ -15,7 +15,7 @@ export default defineEventHandler(async (event) => {
   // entry for the save (open editors take it in instead of overwriting it later) commits with it or not at all.
   const [count, rows] = await useDatabase().transaction(async (transaction) => {
     const result = await Network.update(
-      { document, name: document.name || existing.name, revision: body.revision + 1, updatedBy: user.id },
+      { document, name: document.name?.trim() || existing.name, revision: body.revision + 1, updatedBy: user.id },
       { where: { id: existing.id, revision: body.revision }, returning: true, transaction },
     )
     if (result[0] > 0) {
