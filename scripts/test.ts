@@ -79,11 +79,17 @@ function printSummary(): void {
     console.log('0 passed, 1 failed')
     return
   }
-  const report = JSON.parse(readFileSync(resultsFile, 'utf8')) as { numPassedTests: number; numFailedTests: number; numPendingTests: number; numTodoTests: number }
+  const report = JSON.parse(readFileSync(resultsFile, 'utf8')) as {
+    numPassedTests: number; numFailedTests: number; numPendingTests: number; numTodoTests: number
+    testResults?: Array<{ status: string; assertionResults?: Array<{ status: string }> }>
+  }
   const skipped = report.numPendingTests + report.numTodoTests
+  // A file that fails before its tests run (an error in beforeAll, an import that throws) has no failed test of its
+  // own; it still counts as one failure, so the closing line never says "0 failed" for a red run.
+  const brokenFiles = (report.testResults ?? []).filter(file => file.status === 'failed' && !(file.assertionResults ?? []).some(a => a.status === 'failed')).length
   // The type check counts as one more check in the closing line.
   const passed = report.numPassedTests + (typecheckResult === true ? 1 : 0)
-  const failed = report.numFailedTests + (typecheckResult === false ? 1 : 0)
+  const failed = report.numFailedTests + brokenFiles + (typecheckResult === false ? 1 : 0)
   console.log(`${passed} passed, ${failed} failed${skipped ? `, ${skipped} skipped` : ''}`)
 }
 

@@ -6,7 +6,19 @@ export interface ApiAnswer<T = any> {
   body: T
 }
 
-let addressCounter = 1
+// Every test file loads this module afresh, so a counter would hand the same addresses to every file and
+// their sign-ups would add up against the per-address limit. A random 10.x.y.z, unique within the file, does not.
+const usedAddresses = new Set<string>()
+function freshAddress(): string {
+  for (;;) {
+    const [a, b, c] = crypto.getRandomValues(new Uint8Array(3))
+    const address = `10.${a}.${b}.${c! | 1}`
+    if (!usedAddresses.has(address)) {
+      usedAddresses.add(address)
+      return address
+    }
+  }
+}
 
 /**
  * A cookie-keeping API client standing in for one browser. Each client gets its
@@ -19,7 +31,7 @@ export class ApiClient {
   origin: string | null
 
   constructor(options: { address?: string; origin?: string | null } = {}) {
-    this.address = options.address ?? `10.${(addressCounter >> 8) & 255}.${addressCounter++ & 255}.7`
+    this.address = options.address ?? freshAddress()
     this.origin = options.origin === undefined ? appUrl() : options.origin
   }
 
