@@ -43,6 +43,8 @@ export interface Substrate {
   thickness?: ParamValue
   lossTangent?: ParamValue
   conductivity?: ParamValue
+  /** RMS surface roughness of the conductor (m); Portwright's extension of the contract. */
+  roughness?: ParamValue
   [extra: string]: unknown
 }
 

@@ -5,13 +5,14 @@ import { evaluateParams, type ParamValues } from '../network/params'
 import { parseNetworkDocument } from '../network/schema'
 import { checkTopology } from '../network/topology'
 import type { Evaluated, NetworkDocument, Problem } from '../network/types'
+import { evaluateSubstrates } from '../network/substrates'
 import { evaluateVariables, type VariablesOutcome } from '../network/variables'
 import { BLOCK_MODELS, LATER_BLOCK_TYPES } from './blocks/registry'
 import { CompiledNetwork, type CompileBlock } from './compile'
 import type { JoinOrder } from './join-order'
 import type { JoinPlanCache } from './plan-cache'
 import type { SweepSettings } from './sweep'
-import type { CreateContext, NestedNetwork } from './types'
+import type { CreateContext, NestedNetwork, SubstrateLookup } from './types'
 
 /** Loads the document a `subnetwork` block refers to; `trail` lists the references from the top document down. */
 export type SubnetworkResolver = (ref: string, trail: readonly string[]) => unknown
@@ -40,6 +41,8 @@ export interface PreparedNetwork {
   /** The document's sweep as evaluated; fields it does not give are absent. */
   sweep?: Partial<SweepSettings>
   compiled: CompiledNetwork
+  /** Block models used outside their published ranges, naming the block; `above` (Hz) as in `ModelNote`. */
+  notes: Array<Problem & { above?: number }>
 }
 
 /** Outcome of `prepareNetwork`: evaluated values are filled in even when other parts fail. */
@@ -80,13 +83,25 @@ function prepareAt(input: unknown, options: PrepareOptions, trail: readonly stri
 
   const referenceImpedance = evaluateReference(document, variables, evaluated, problems)
   const sweep = evaluateSweep(document, variables, evaluated, problems)
+  const substrates = evaluateSubstrates(document.substrates, variables.scope, variables.failed)
+  Object.assign(evaluated.settings, substrates.evaluated)
+  problems.push(...substrates.problems)
+  const substrate = (name: string): SubstrateLookup => {
+    const found = substrates.values.get(name)
+    if (found) return { ok: true, substrate: found }
+    if (substrates.failed.has(name)) return { ok: false, message: `substrate "${name}" has errors (see substrates.${name})` }
+    const known = Object.keys(document.substrates ?? {})
+    return { ok: false, message: known.length ? `"${name}" is not one of the document's substrates (${known.join(', ')})` : `"${name}" names no substrate: the document has none; add one under substrates` }
+  }
 
   const context = (blockId: string): CreateContext => ({
     blockId,
     referenceImpedance,
     buildNetwork: (doc, label) => nested(prepareAt(doc, { ...options, joinOrder: 'auto' }, trail, budget), label),
     resolveNetwork: ref => resolve(ref, options, trail, budget),
+    substrate,
   })
+  const notes: PreparedNetwork['notes'] = []
 
   const compileBlocks: CompileBlock[] = []
   const terminals = new Map<string, number>()
@@ -120,6 +135,9 @@ function prepareAt(input: unknown, options: PrepareOptions, trail: readonly stri
       for (const p of created.problems) blockProblem(p.field, p.message)
       continue
     }
+    for (const note of created.notes ?? []) {
+      notes.push({ block: block.id, ...(note.field ? { field: note.field } : {}), ...(note.above !== undefined ? { above: note.above } : {}), message: `block ${block.id} (${block.type})${note.field ? `, ${note.field}` : ''}: ${note.message}` })
+    }
     terminals.set(block.id, created.instance.terminals)
     compileBlocks.push({ id: block.id, type: block.type, instance: created.instance })
   }
@@ -131,7 +149,7 @@ function prepareAt(input: unknown, options: PrepareOptions, trail: readonly stri
   return {
     ok: true,
     evaluated,
-    network: { document, ports: compiled.ports, impedances: compiled.impedances, blocks: compiled.blockCount, ...(sweep ? { sweep } : {}), compiled },
+    network: { document, ports: compiled.ports, impedances: compiled.impedances, blocks: compiled.blockCount, ...(sweep ? { sweep } : {}), compiled, notes },
   }
 }
 

@@ -1,3 +1,4 @@
+import type { MicrostripSubstrate } from '../microstrip/types'
 import type { ParamSpec, ParamValues } from '../network/params'
 import type { Problem } from '../network/types'
 
@@ -48,10 +49,25 @@ export interface CreateContext {
   buildNetwork(document: unknown, label: string): { ok: true; network: NestedNetwork } | { ok: false; problems: Problem[] }
   /** Resolves and builds a subnetwork by reference, through the caller's resolver. */
   resolveNetwork(ref: string): { ok: true; network: NestedNetwork } | { ok: false; problems: Problem[] }
+  /** The document's substrate of that name, evaluated; a message naming the known ones when there is none. */
+  substrate(name: string): SubstrateLookup
+}
+
+/** Outcome of looking up a substrate by name. */
+export type SubstrateLookup = { ok: true; substrate: MicrostripSubstrate } | { ok: false; message: string }
+
+/**
+ * A block model used outside its published range: the result is still given, with this warning.
+ * With `above` (Hz) it applies only when the sweep goes above that frequency.
+ */
+export interface ModelNote {
+  field?: string
+  message: string
+  above?: number
 }
 
 /** Result of building a block instance. Problem messages name the field but not the block; the caller adds it. */
-export type CreateOutcome = { ok: true; instance: BlockInstance } | { ok: false; problems: Array<{ field?: string; message: string }> }
+export type CreateOutcome = { ok: true; instance: BlockInstance; notes?: ModelNote[] } | { ok: false; problems: Array<{ field?: string; message: string }> }
 
 /** A block type: its parameters, cross-parameter checks and how to build its instance. */
 export interface BlockModel {
