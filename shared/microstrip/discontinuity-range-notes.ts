@@ -27,3 +27,14 @@ export function stepRangeNotes(wide: number, narrow: number, height: number, per
   if (Math.abs(narrowU - 1) > 0.1) notes.push({ field: 'width', message: `the step-inductance fit was made at W2/h = 1 (here ${show(narrowU)}); it is extrapolated` })
   return notes
 }
+
+/** Where a bend leaves the stated ranges of its fits (square: 2.5 ≤ εr ≤ 15, 0.1 ≤ u ≤ 5; mitred: 2.36 ≤ εr ≤ 10.4, 0.2 ≤ u ≤ 6). */
+export function bendRangeNotes(u: number, permittivity: number, corner: 'square' | 'mitred'): RangeNote[] {
+  const [uMin, uMax, eMin, eMax, name] = corner === 'mitred'
+    ? [0.2, 6, 2.36, 10.4, 'the mitred-bend fit of Kirschning, Jansen & Koster']
+    : [0.1, 5, 2.5, 15, 'the square-bend fit of Gupta, Garg, Bahl & Bhartia']
+  const notes: RangeNote[] = []
+  if (u < uMin || u > uMax) notes.push({ field: 'width', message: `W/h = ${show(u)} is outside ${uMin}…${uMax}, the range of ${name}` })
+  if (permittivity < eMin || permittivity > eMax) notes.push({ field: 'permittivity', message: `εr = ${show(permittivity)} is outside ${eMin}…${eMax}, the range of ${name}` })
+  return notes
+}

@@ -2,8 +2,8 @@ import { C0 } from '../../microstrip/constants'
 import { stepRangeNotes } from '../../microstrip/discontinuity-range-notes'
 import { staticMicrostrip } from '../../microstrip/static-microstrip'
 import { stepParasitics } from '../../microstrip/step-parasitics'
+import { lumpedTeeS } from '../math/lumped-tee-s'
 import type { BlockModel } from '../types'
-import { abcdToS } from '../math/abcd-to-s'
 
 /**
  * Step in width between two microstrips, `width1` at terminal 1 and `width2` at terminal 2: series
@@ -35,7 +35,6 @@ export const microstripStepModel: BlockModel = {
     const l1 = perLength(w1), l2 = perLength(w2)
     const la = (inductance * l1) / (l1 + l2), lb = (inductance * l2) / (l1 + l2)
     const r = context.referenceImpedance
-    const abcd = new Float64Array(8), s = new Float64Array(8)
     return {
       ok: true,
       notes: stepRangeNotes(wide, narrow, height, permittivity),
@@ -45,18 +44,7 @@ export const microstripStepModel: BlockModel = {
         reciprocal: true,
         constant: false,
         fill(frequency, re, im) {
-          // Series jωLa, shunt jωC, series jωLb: A = 1 − ω²LaC, B = jω(La + Lb − ω²LaLbC), C = jωC, D = 1 − ω²LbC.
-          const w = 2 * Math.PI * frequency
-          abcd.fill(0)
-          abcd[0] = 1 - w * w * la * capacitance
-          abcd[3] = w * (la + lb - w * w * la * lb * capacitance)
-          abcd[5] = w * capacitance
-          abcd[6] = 1 - w * w * lb * capacitance
-          abcdToS(abcd, r, r, s)
-          for (let e = 0; e < 4; e++) {
-            re[e] = s[2 * e]!
-            im[e] = s[2 * e + 1]!
-          }
+          lumpedTeeS(2 * Math.PI * frequency, la, capacitance, lb, r, re, im)
           return true
         },
       },

@@ -6,6 +6,7 @@ import { hybrid90Model } from './hybrid90'
 import { lineModel } from './line'
 import { loadModel } from './load'
 import { microstripModel } from './microstrip'
+import { microstripBendModel } from './microstrip-bend'
 import { microstripOpenModel } from './microstrip-open'
 import { microstripStepModel } from './microstrip-step'
 import { phaseModel } from './phase'
@@ -31,6 +32,7 @@ export const BLOCK_MODELS: Readonly<Record<string, BlockModel>> = Object.fromEnt
     microstripModel,
     microstripOpenModel,
     microstripStepModel,
+    microstripBendModel,
   ].map(model => [model.type, model]),
 )
 

@@ -3,7 +3,8 @@ import { openEndExtension } from '../../../shared/microstrip/open-end-extension'
 import { openEndExtensionHammerstad } from '../../../shared/microstrip/open-end-extension-hammerstad'
 import { staticMicrostrip } from '../../../shared/microstrip/static-microstrip'
 import { stepParasitics } from '../../../shared/microstrip/step-parasitics'
-import { stepRangeNotes } from '../../../shared/microstrip/discontinuity-range-notes'
+import { bendParasitics } from '../../../shared/microstrip/bend-parasitics'
+import { bendRangeNotes, stepRangeNotes } from '../../../shared/microstrip/discontinuity-range-notes'
 
 describe('open-end length extension', () => {
   it('Kirschning–Jansen–Koster 1981 and Hammerstad 1975 agree within 5 % for 0.5 ≤ W/h ≤ 2', () => {
@@ -54,5 +55,23 @@ describe('step in width', () => {
   it('warns outside the fitted ranges', () => {
     expect(stepRangeNotes(1.2 * h, h, h, 9.6).map(n => n.message).join('\n')).toMatch(/below 1\.5/)
     expect(stepRangeNotes(6 * h, h, h, 4).map(n => n.message).join('\n')).toMatch(/εr = 9\.6/)
+  })
+})
+
+describe('right-angle bend', () => {
+  it('square corner at W/h = 1, εr = 9.6: C/W = 149.37 pF/m, L/h = −21 nH/m (derived by hand from the closed forms)', () => {
+    // Gupta, Garg, Bahl & Bhartia 1996 [memory]: (9.5·9.6 + 1.25)·1 + 5.2·9.6 + 7.0 = 149.37; 100·(4 − 4.21) = −21.
+    const p = bendParasitics(1e-3, 1e-3, 9.6, 'square')
+    expect(p.capacitance / 1e-3 / 1e-12).toBeCloseTo(149.37, 6)
+    expect(p.inductance / 1e-3 / 1e-9).toBeCloseTo(-21, 9)
+  })
+
+  it('mitred corner at W/h = 1, εr = 9.6: C/W = 3.93·9.6 + 0.62 + 7.6·9.6 + 3.8 pF/m (derived by hand)', () => {
+    // Kirschning, Jansen & Koster 1983 [memory]; L/h = 440.2·(1 − 1.062·e^(−0.177)) = 84.69 nH/m.
+    const p = bendParasitics(1e-3, 1e-3, 9.6, 'mitred')
+    expect(p.capacitance / 1e-3 / 1e-12).toBeCloseTo(3.93 * 9.6 + 0.62 + 7.6 * 9.6 + 3.8, 9)
+    expect(p.inductance / 1e-3 / 1e-9).toBeCloseTo(440.2 * (1 - 1.062 * Math.exp(-0.177)), 9)
+    expect(bendRangeNotes(1, 9.6, 'mitred')).toEqual([])
+    expect(bendRangeNotes(8, 12, 'mitred').map(n => n.field)).toEqual(['width', 'permittivity'])
   })
 })

@@ -58,3 +58,27 @@ describe('microstrip step in width', () => {
     }
   })
 })
+
+describe('microstrip right-angle bend', () => {
+  const bend = (params: Record<string, unknown>) => doc([port(1), port(2), { id: 'BD', type: 'microstripBend', params: { substrate: 'core', ...params } }],
+    [['P1.1', 'BD.1'], ['BD.2', 'P2.1']], { substrates })
+
+  it('is symmetric, reciprocal and lossless, and a through connection at 0 Hz', () => {
+    for (const corner of ['square', 'mitred']) {
+      const r = solveAt(bend({ width: '0.6 mm', corner }), [0, 2e9, 12e9])
+      expect(maxDiff(matrix(r, 0), [[[0, 0], [1, 0]], [[1, 0], [0, 0]]])).toBeLessThan(1e-15)
+      for (let k = 1; k < 3; k++) {
+        const m = matrix(r, k)
+        expect(maxDiff([[m[0]![0]!]], [[m[1]![1]!]])).toBeLessThan(1e-15)
+        expect(maxDiff([[m[0]![1]!]], [[m[1]![0]!]])).toBeLessThan(1e-15)
+        expect(maxDiff(gram(m), [[[1, 0], [0, 0]], [[0, 0], [1, 0]]])).toBeLessThan(1e-12)
+      }
+    }
+  })
+
+  it('mitring the corner reflects less than a square corner on a wide strip [common practice]', () => {
+    const square = solveAt(bend({ width: '1.5 mm', corner: 'square' }), [10e9])
+    const mitred = solveAt(bend({ width: '1.5 mm', corner: 'mitred' }), [10e9])
+    expect(abs(s(mitred, 1, 1))).toBeLessThan(abs(s(square, 1, 1)))
+  })
+})
