@@ -10,7 +10,8 @@ export interface BendParasitics {
  * fitted to computed data; stated for 2.5 ≤ εr ≤ 15, 0.1 ≤ u ≤ 5):
  * C/W in pF/m = ((14εr + 12.5)u − (1.83εr − 2.25))/√u + 0.02εr/u (u < 1), (9.5εr + 1.25)u + 5.2εr + 7.0 (u ≥ 1);
  * L/h in nH/m = 100·(4√u − 4.21) (negative for narrow strips: the reference planes sit at the corner).
- * Optimally mitred corner (Kirschning, Jansen & Koster, measured by an improved resonator method, 1983;
+ * Optimally mitred corner (Kirschning, Jansen & Koster, "Measurement and computer-aided modeling of microstrip
+ * discontinuities by an improved resonator method", IEEE MTT-S Digest 1983, pp. 495–497;
  * stated for 2.36 ≤ εr ≤ 10.4, 0.2 ≤ u ≤ 6):
  * C/W in pF/m = (3.93εr + 0.62)u + 7.6εr + 3.80; L/h in nH/m = 440.2·(1 − 1.062·e^(−0.177·u^0.947)).
  */

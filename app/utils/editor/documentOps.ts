@@ -54,7 +54,7 @@ export function addBlock(doc: NetworkDocument, kind: BlockKind, at: { x: number,
   const id = freshId(spec.idPrefix, new Set(doc.blocks.map(b => b.id)))
   const params: Record<string, ParamValue> = { ...spec.defaults }
   if (kind === 'port') params.index = nextPortIndex(doc)
-  if (kind === 'microstrip') {
+  if (kind === 'microstrip' || kind === 'microstripOpen' || kind === 'microstripStep' || kind === 'microstripBend') {
     // The block needs a substrate to be solved: use the first one, or start one the settings panel can edit.
     params.substrate = Object.keys(doc.substrates ?? {})[0] ?? addSubstrate(doc)
   }

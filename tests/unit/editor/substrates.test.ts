@@ -23,6 +23,22 @@ describe('microstrip blocks placed from the rail', () => {
     expect(doc.blocks.find(b => b.id === second)!.params.substrate).toBe('board')
     expect(Object.keys(doc.substrates ?? {})).toEqual(['board'])
   })
+
+  it('the open end, step and bend kinds also start with parameters the solver accepts', () => {
+    const doc = emptyDocument('t')
+    const p1 = addBlock(doc, 'port', { x: 0, y: 0 })
+    const p2 = addBlock(doc, 'port', { x: 400, y: 0 })
+    const step = addBlock(doc, 'microstripStep', { x: 100, y: 0 })
+    const bend = addBlock(doc, 'microstripBend', { x: 200, y: 0 })
+    const line = addBlock(doc, 'microstrip', { x: 300, y: 0 })
+    const open = addBlock(doc, 'microstripOpen', { x: 300, y: 100 })
+    for (const [a, b] of [[`${p1}.1`, `${step}.1`], [`${step}.2`, `${bend}.1`], [`${bend}.2`, `${line}.1`], [`${line}.2`, `${p2}.1`], [`${line}.2`, `${open}.1`]] as const) {
+      expect(connect(doc, a, b)).toBe(true)
+    }
+    const prepared = prepareNetwork(doc)
+    if (!prepared.ok) throw new Error(prepared.problems.map(p => p.message).join('\n'))
+    expect(solveNetwork(prepared.network, Float64Array.of(1e9)).ok).toBe(true)
+  })
 })
 
 describe('substrate edits', () => {
