@@ -8,10 +8,7 @@
  * Bad input: exit 2, one line per problem naming the option, nothing on standard output.
  */
 import { parseArgs } from 'node:util'
-import { analyseMicrostrip } from '../shared/microstrip/analyse-microstrip'
-import { C0, DB_PER_NEPER } from '../shared/microstrip/constants'
-import { microstripRangeNotes, notesAt } from '../shared/microstrip/range-notes'
-import { synthesiseWidth } from '../shared/microstrip/synthesise-width'
+import { lineFigures } from '../shared/microstrip/line-figures'
 import type { MicrostripSubstrate } from '../shared/microstrip/types'
 import type { QuantityKind } from '../shared/network/quantities'
 import { fail, quantityOption } from './network-cli'
@@ -85,23 +82,11 @@ function main(): void {
     ...(o.conductivity !== undefined ? { conductivity: o.conductivity } : {}),
   }
   const frequency = o.frequency
-  let width = o.width
-  if (width === undefined) {
-    const found = synthesiseWidth(substrate, o.impedance!, frequency ?? 0)
-    if (!found.ok) fail([`--impedance: ${found.message}`])
-    width = found.width
-  }
-  const line = analyseMicrostrip(substrate, width, frequency ?? 0)
-  const output: Record<string, number> = { width, impedance: line.impedance, epsEff: line.epsEff }
-  if (frequency !== undefined) {
-    const wavelength = C0 / (frequency * Math.sqrt(line.epsEff))
-    output.wavelength = wavelength
-    if (o.degrees !== undefined) output.length = (o.degrees / 360) * wavelength
-    output.lossDbPerMetre = DB_PER_NEPER * (line.conductorLoss + line.dielectricLoss)
-  }
-  for (const note of notesAt(microstripRangeNotes(width / substrate.height, substrate.permittivity, substrate.height), frequency)) {
-    process.stderr.write(`warning: ${note.message}\n`)
-  }
+  const question = o.width !== undefined ? { width: o.width } : { impedance: o.impedance! }
+  const outcome = lineFigures(substrate, { ...question, ...(frequency !== undefined ? { frequency } : {}), ...(o.degrees !== undefined ? { degrees: o.degrees } : {}) })
+  if (!outcome.ok) fail([`--${outcome.field}: ${outcome.message}`])
+  for (const note of outcome.notes) process.stderr.write(`warning: ${note.message}\n`)
+  const output = outcome.figures
   process.stdout.write(`${JSON.stringify(output)}\n`)
 }
 
