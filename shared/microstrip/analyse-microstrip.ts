@@ -1,7 +1,7 @@
 import { conductorLoss } from './conductor-loss'
 import { dielectricLoss } from './dielectric-loss'
-import { dispersiveEffectivePermittivity } from './dispersive-effective-permittivity'
-import { dispersiveImpedance } from './dispersive-impedance'
+import { permittivityDispersion } from './dispersive-effective-permittivity'
+import { impedanceDispersion } from './dispersive-impedance'
 import { normalisedFrequency } from './normalised-frequency'
 import { staticMicrostrip } from './static-microstrip'
 import type { MicrostripSubstrate } from './types'
@@ -24,23 +24,34 @@ export interface MicrostripAnalysis {
  * the thickness-corrected static values and the plain ratio u = W/h.
  */
 export function analyseMicrostrip(substrate: MicrostripSubstrate, width: number, frequency = 0): MicrostripAnalysis {
+  return microstripSweep(substrate, width)(frequency)
+}
+
+/**
+ * The same analysis for one strip at many frequencies: everything that does not depend on frequency
+ * (the static model, the frequency-independent terms of the dispersion laws) is worked out once.
+ */
+export function microstripSweep(substrate: MicrostripSubstrate, width: number): (frequency: number) => MicrostripAnalysis {
   const u = width / substrate.height
   const quasi = staticMicrostrip(u, substrate.thickness / substrate.height, substrate.permittivity)
-  if (frequency <= 0) {
-    return { impedance: quasi.impedance, epsEff: quasi.epsEff, staticImpedance: quasi.impedance, staticEpsEff: quasi.epsEff, conductorLoss: 0, dielectricLoss: 0 }
-  }
-  const fn = normalisedFrequency(frequency, substrate.height)
-  const epsEff = dispersiveEffectivePermittivity(u, substrate.permittivity, quasi.epsEff, fn)
-  const impedance = dispersiveImpedance(u, substrate.permittivity, quasi.impedance, quasi.epsEff, epsEff, fn)
-  const alphaC = substrate.conductivity === undefined
-    ? 0
-    : conductorLoss(frequency, { width, conductivity: substrate.conductivity, roughness: substrate.roughness, impedance: quasi.impedance, airImpedance: quasi.airImpedance })
-  return {
-    impedance,
-    epsEff,
-    staticImpedance: quasi.impedance,
-    staticEpsEff: quasi.epsEff,
-    conductorLoss: alphaC,
-    dielectricLoss: dielectricLoss(frequency, substrate.permittivity, epsEff, substrate.lossTangent),
+  const epsAt = permittivityDispersion(u, substrate.permittivity, quasi.epsEff)
+  const impedanceAt = impedanceDispersion(u, substrate.permittivity, quasi.impedance, quasi.epsEff)
+  const metal = substrate.conductivity === undefined
+    ? undefined
+    : { width, conductivity: substrate.conductivity, roughness: substrate.roughness, impedance: quasi.impedance, airImpedance: quasi.airImpedance }
+  return (frequency) => {
+    if (frequency <= 0) {
+      return { impedance: quasi.impedance, epsEff: quasi.epsEff, staticImpedance: quasi.impedance, staticEpsEff: quasi.epsEff, conductorLoss: 0, dielectricLoss: 0 }
+    }
+    const fn = normalisedFrequency(frequency, substrate.height)
+    const epsEff = epsAt(fn)
+    return {
+      impedance: impedanceAt(epsEff, fn),
+      epsEff,
+      staticImpedance: quasi.impedance,
+      staticEpsEff: quasi.epsEff,
+      conductorLoss: metal ? conductorLoss(frequency, metal) : 0,
+      dielectricLoss: dielectricLoss(frequency, substrate.permittivity, epsEff, substrate.lossTangent),
+    }
   }
 }

@@ -66,9 +66,13 @@ export function evaluateSubstrates(substrates: Record<string, Substrate> | undef
         continue
       }
       const result = evaluateQuantity(input, spec.kind, scope, failedVariables)
-      const error = !result.ok ? result.error : rangeError(result.value, spec)
-      if (error || !result.ok) {
-        fail(error ?? 'cannot be evaluated')
+      if (!result.ok) {
+        fail(result.error)
+        continue
+      }
+      const error = rangeError(result.value, spec)
+      if (error) {
+        fail(error)
         continue
       }
       values[key] = result.value

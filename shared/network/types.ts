@@ -123,6 +123,6 @@ export interface EvaluatedValue {
 export interface Evaluated {
   variables: Record<string, EvaluatedValue>
   blocks: Record<string, Record<string, EvaluatedValue>>
-  /** `referenceImpedance`, `sweep.start`, `sweep.stop`, `sweep.points`. */
+  /** `referenceImpedance`, `sweep.start`, `sweep.stop`, `sweep.points`, and `substrates.NAME.KEY` for each substrate value. */
   settings: Record<string, EvaluatedValue>
 }

@@ -1,4 +1,4 @@
-import { analyseMicrostrip } from '../../microstrip/analyse-microstrip'
+import { microstripSweep } from '../../microstrip/analyse-microstrip'
 import { C0 } from '../../microstrip/constants'
 import { openEndRangeNotes } from '../../microstrip/discontinuity-range-notes'
 import { openEndExtension } from '../../microstrip/open-end-extension'
@@ -28,6 +28,7 @@ export const microstripOpenModel: BlockModel = {
     const quasi = staticMicrostrip(u, substrate.thickness / substrate.height, substrate.permittivity)
     const extension = openEndExtension(u, substrate.permittivity, quasi.epsEff) * substrate.height
     const r = context.referenceImpedance
+    const analyse = microstripSweep(substrate, width)
     return {
       ok: true,
       notes: openEndRangeNotes(u, substrate.permittivity),
@@ -37,7 +38,7 @@ export const microstripOpenModel: BlockModel = {
         reciprocal: true,
         constant: false,
         fill(frequency, re, im) {
-          const line = analyseMicrostrip(substrate, width, frequency)
+          const line = analyse(frequency)
           const tau = Math.tan((2 * Math.PI * frequency * Math.sqrt(line.epsEff) * extension) / C0)
           // (−jZ − Rτ)/(−jZ + Rτ): numerator n = (−Rτ, −Z), denominator d = (Rτ, −Z).
           const z = line.impedance, x = r * tau

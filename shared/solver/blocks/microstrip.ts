@@ -1,4 +1,4 @@
-import { analyseMicrostrip } from '../../microstrip/analyse-microstrip'
+import { microstripSweep } from '../../microstrip/analyse-microstrip'
 import { C0 } from '../../microstrip/constants'
 import { microstripRangeNotes } from '../../microstrip/range-notes'
 import { abcdToS } from '../math/abcd-to-s'
@@ -31,6 +31,7 @@ export const microstripModel: BlockModel = {
     const width = values.width as number, length = values.length as number
     const reference = context.referenceImpedance
     const abcd = new Float64Array(8), s = new Float64Array(8)
+    const analyse = microstripSweep(substrate, width)
     return {
       ok: true,
       notes: microstripRangeNotes(width / substrate.height, substrate.permittivity, substrate.height),
@@ -41,7 +42,7 @@ export const microstripModel: BlockModel = {
         constant: false,
         shareKey: `microstrip:${JSON.stringify(substrate)}:${width}:${length}:${reference}`,
         fill(frequency, re, im) {
-          const line = analyseMicrostrip(substrate, width, frequency)
+          const line = analyse(frequency)
           const radians = (2 * Math.PI * frequency * Math.sqrt(line.epsEff) * length) / C0
           const nepers = (line.conductorLoss + line.dielectricLoss) * length
           abcdToS(lossyLineAbcd(line.impedance, nepers, radians, abcd), reference, reference, s)
