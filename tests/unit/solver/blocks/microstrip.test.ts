@@ -96,3 +96,30 @@ describe('microstrip block', () => {
     expect(high.ok && high.warnings[0]!.block).toBe('MS')
   })
 })
+
+describe('a branch-line hybrid of microstrips', () => {
+  it('sized at f0 by synthesis, it is the ideal quadrature hybrid at f0 (Pozar, Microwave Engineering, 4th ed., §7.5)', () => {
+    // Pozar §7.5: S = −(1/√2)[[0, j, 1, 0], [j, 0, 0, 1], [1, 0, 0, j], [0, 1, j, 0]] at f0, arms of Z0/√2 and Z0, a quarter wave each.
+    const f0 = 2.45e9
+    const arm = (impedance: number) => {
+      const found = synthesiseWidth(SUBSTRATE, impedance, f0)
+      if (!found.ok) throw new Error(found.message)
+      const epsEff = analyseMicrostrip(SUBSTRATE, found.width, f0).epsEff
+      return { substrate: 'core', width: found.width, length: C0 / (f0 * Math.sqrt(epsEff)) / 4 }
+    }
+    const through = arm(50 / Math.SQRT2), branch = arm(50)
+    const blocks = [port(1), port(2), port(3), port(4),
+      { id: 'A', type: 'microstrip', params: through }, { id: 'B', type: 'microstrip', params: through },
+      { id: 'C', type: 'microstrip', params: branch }, { id: 'D', type: 'microstrip', params: branch }]
+    const wires: Array<[string, string]> = [['P1.1', 'A.1'], ['A.2', 'P2.1'], ['P4.1', 'B.1'], ['B.2', 'P3.1'], ['P1.1', 'C.1'], ['C.2', 'P4.1'], ['P2.1', 'D.1'], ['D.2', 'P3.1']]
+    const result = solveAt(doc(blocks, wires, { substrates: { core: lossless } }), [f0])
+    const k = -Math.SQRT1_2
+    const ideal: Array<Array<[number, number]>> = [
+      [[0, 0], [0, k], [k, 0], [0, 0]],
+      [[0, k], [0, 0], [0, 0], [k, 0]],
+      [[k, 0], [0, 0], [0, 0], [0, k]],
+      [[0, 0], [k, 0], [0, k], [0, 0]],
+    ]
+    expect(maxDiff(matrix(result), ideal)).toBeLessThan(1e-9)
+  })
+})
