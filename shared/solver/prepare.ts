@@ -12,7 +12,7 @@ import { CompiledNetwork, type CompileBlock } from './compile'
 import type { JoinOrder } from './join-order'
 import type { JoinPlanCache } from './plan-cache'
 import type { SweepSettings } from './sweep'
-import type { CreateContext, NestedNetwork, SubstrateLookup } from './types'
+import type { CreateContext, NestedOutcome, SubstrateLookup } from './types'
 
 /** Loads the document a `subnetwork` block refers to; `trail` lists the references from the top document down. */
 export type SubnetworkResolver = (ref: string, trail: readonly string[]) => unknown
@@ -189,12 +189,15 @@ function evaluateSweep(document: NetworkDocument, variables: VariablesOutcome, e
   return sweep
 }
 
-function nested(result: PrepareResult, label: string): { ok: true; network: NestedNetwork } | { ok: false; problems: Problem[] } {
-  if (result.ok) return { ok: true, network: result.network.compiled }
+function nested(result: PrepareResult, label: string): NestedOutcome {
+  if (result.ok) {
+    const notes = result.network.notes.map(({ message, above }) => ({ message: `in ${label}: ${message}`, ...(above !== undefined ? { above } : {}) }))
+    return { ok: true, network: result.network.compiled, notes }
+  }
   return { ok: false, problems: result.problems.map(p => ({ message: `in ${label}: ${p.message}` })) }
 }
 
-function resolve(ref: string, options: PrepareOptions, trail: readonly string[], budget: ExpansionBudget): { ok: true; network: NestedNetwork } | { ok: false; problems: Problem[] } {
+function resolve(ref: string, options: PrepareOptions, trail: readonly string[], budget: ExpansionBudget): NestedOutcome {
   if (trail.includes(ref)) return { ok: false, problems: [{ message: `network "${ref}" contains itself: ${[...trail, ref].join(' → ')}` }] }
   if (trail.length >= MAX_DEPTH) return { ok: false, problems: [{ message: `subnetworks are nested more than ${MAX_DEPTH} deep at "${ref}"` }] }
   if (!options.resolveSubnetwork) return { ok: false, problems: [{ message: `network "${ref}" cannot be loaded here (no subnetwork loader was given)` }] }

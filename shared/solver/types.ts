@@ -46,12 +46,15 @@ export interface CreateContext {
   blockId: string
   referenceImpedance: number
   /** Builds a nested network from a document (for blocks made of other blocks). */
-  buildNetwork(document: unknown, label: string): { ok: true; network: NestedNetwork } | { ok: false; problems: Problem[] }
+  buildNetwork(document: unknown, label: string): NestedOutcome
   /** Resolves and builds a subnetwork by reference, through the caller's resolver. */
-  resolveNetwork(ref: string): { ok: true; network: NestedNetwork } | { ok: false; problems: Problem[] }
+  resolveNetwork(ref: string): NestedOutcome
   /** The document's substrate of that name, evaluated; a message naming the known ones when there is none. */
   substrate(name: string): SubstrateLookup
 }
+
+/** A nested network built for a block, with the range warnings of the blocks inside it (messages say where). */
+export type NestedOutcome = { ok: true; network: NestedNetwork; notes: ModelNote[] } | { ok: false; problems: Problem[] }
 
 /** Outcome of looking up a substrate by name. */
 export type SubstrateLookup = { ok: true; substrate: MicrostripSubstrate } | { ok: false; message: string }

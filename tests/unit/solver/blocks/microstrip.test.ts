@@ -97,6 +97,20 @@ describe('microstrip block', () => {
   })
 })
 
+describe('microstrip warnings inside a subnetwork', () => {
+  it('reach the solve through the subnetwork block, saying where they come from', () => {
+    const inner = twoPort(ms({ width: '1 um', length: '10 mm' }), { core })
+    const outer = doc([port(1), port(2), { id: 'S', type: 'subnetwork', params: { network: 'inner' } }], [['P1.1', 'S.1'], ['S.2', 'P2.1']])
+    const prepared = prepareNetwork(outer, { resolveSubnetwork: ref => (ref === 'inner' ? inner : undefined) })
+    if (!prepared.ok) throw new Error(prepared.problems[0]!.message)
+    const solved = solveNetwork(prepared.network, Float64Array.of(1e9))
+    expect(solved.ok && solved.warnings.map(w => w.message)[0]).toBe(
+      'block S (subnetwork): in network "inner": block MS (microstrip), width: W/h = 0.002 is outside 0.01…100, the range of the Hammerstad–Jensen static model',
+    )
+    expect(solved.ok && solved.warnings[0]!.block).toBe('S')
+  })
+})
+
 describe('a branch-line hybrid of microstrips', () => {
   it('sized at f0 by synthesis, it is the ideal quadrature hybrid at f0 (Pozar, Microwave Engineering, 4th ed., §7.5)', () => {
     // Pozar §7.5: S = −(1/√2)[[0, j, 1, 0], [j, 0, 0, 1], [1, 0, 0, j], [0, 1, j, 0]] at f0, arms of Z0/√2 and Z0, a quarter wave each.
