@@ -25,6 +25,14 @@ describe('microstrip losses', () => {
     expect(roughnessFactor(1e-3, 1e-6)).toBeGreaterThan(1.999)
   })
 
+  it('a rough conductor loses more by exactly the Hammerstad–Bekkadal factor', () => {
+    const line = staticMicrostrip(2, 0, 4)
+    const metal = { width: 2e-3, conductivity: COPPER, roughness: 0, impedance: line.impedance, airImpedance: line.airImpedance }
+    const delta = skinDepth(5e9, COPPER)
+    const rough = conductorLoss(5e9, { ...metal, roughness: delta }) / conductorLoss(5e9, metal)
+    expect(rough).toBeCloseTo(1 + (2 / Math.PI) * Math.atan(1.4), 12)
+  })
+
   it('conductor loss tends to Pozar eq. 3.199, Rs/(Z0·W), for wide strips', () => {
     // Pozar, 4th ed., eq. 3.199 [memory] is the wide-strip (parallel-plate) value; the current-distribution factor
     // exp(−1.2(Z01/η0)^0.7) of Hammerstad & Jensen tends to 1 there.
