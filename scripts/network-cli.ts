@@ -5,6 +5,7 @@
 import { existsSync, readFileSync, statSync } from 'node:fs'
 import { basename, dirname, resolve } from 'node:path'
 import { evaluateQuantity } from '../shared/network/expression'
+import type { QuantityKind } from '../shared/network/quantities'
 import type { Problem } from '../shared/network/types'
 import type { DataResolver, DataSet, PrepareOptions, SubnetworkResolver, SweepSettings } from '../shared/solver/index'
 import { TOUCHSTONE_LIMITS } from '../shared/touchstone/limits'
@@ -94,4 +95,11 @@ export function sweepOverride(values: { start?: string; stop?: string; points?: 
   }
   if (problems.length) fail(problems)
   return override
+}
+
+/** Reads one command-line value as a quantity (a number in SI or text with units, "0.508 mm"); an error names the option. */
+export function quantityOption(option: string, text: string, kind: QuantityKind): { ok: true; value: number } | { ok: false; error: string } {
+  const numeric = Number(text)
+  const outcome = evaluateQuantity(Number.isFinite(numeric) && text.trim() !== '' ? numeric : text, kind, new Map())
+  return outcome.ok ? outcome : { ok: false, error: `--${option}: ${outcome.error}` }
 }

@@ -18,6 +18,10 @@ import {
 } from '~~/app/utils/editor/documentOps'
 import { createMemorySource, type ChangeOrigin, type DocumentSource, type TransactOptions } from '~~/app/utils/editor/documentSource'
 import { emptyDocument } from '~~/app/utils/editor/emptyDocument'
+import {
+  addSubstrate as addSubstrateOp, removeSubstrate as removeSubstrateOp, renameSubstrate as renameSubstrateOp,
+  setSubstrateValue as setSubstrateValueOp, type SubstrateField,
+} from '~~/app/utils/editor/substrateOps'
 
 /** A frequency marker on the plots. */
 export interface Marker { id: number, frequency: number }
@@ -248,6 +252,24 @@ export const useEditorStore = defineStore('editor', () => {
     })
   }
 
+  /** The document's substrates: add, edit one key, rename (blocks follow), remove. */
+  function addSubstrate(): string | undefined {
+    let name: string | undefined
+    edit((d) => { name = addSubstrateOp(d) })
+    return name
+  }
+  function setSubstrateValue(name: string, key: SubstrateField, value: ParamValue | undefined) {
+    edit(d => setSubstrateValueOp(d, name, key, value), { mergeKey: `substrate:${name}.${key}` })
+  }
+  function renameSubstrate(from: string, to: string): boolean {
+    let renamed = false
+    edit((d) => { renamed = renameSubstrateOp(d, from, to) })
+    return renamed
+  }
+  function removeSubstrate(name: string) {
+    edit(d => removeSubstrateOp(d, name))
+  }
+
   function undo() { if (!readOnly.value) source.undo() }
   function redo() { if (!readOnly.value) source.redo() }
 
@@ -265,6 +287,7 @@ export const useEditorStore = defineStore('editor', () => {
     addBlock, connect, removeWires, deleteSelection, rotateSelection, flipSelection, moveBlocks, nudgeSelection,
     setParam, setLengthMode, renameBlock, copySelection, paste, duplicateSelection,
     setName, setReferenceImpedance, setSweep, setVariable, renameVariable, removeVariable,
+    addSubstrate, setSubstrateValue, renameSubstrate, removeSubstrate,
     undo, redo, savedDocument,
   }
 })

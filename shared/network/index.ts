@@ -3,6 +3,7 @@ export type { BlockLayout, BlockSpec, DocumentVersion, Evaluated, EvaluatedValue
 export { blockLayoutSchema, blockSpecSchema, networkDocumentSchema, parseNetworkDocument, specConditionSchema, specDocumentSchema, substrateSchema, sweepSchema, tolerancesSchema, tunablesSchema, wireSchema, type ParseResult } from './schema'
 export { evaluateQuantity, parseExpression, type Scope } from './expression'
 export { evaluateVariables, type VariablesOutcome } from './variables'
+export { evaluateSubstrates, SUBSTRATE_KEYS, type SubstratesOutcome } from './substrates'
 export { evaluateParams, type ParamSpec, type ParamValues } from './params'
 export { checkTopology, type TopologyInfo } from './topology'
 export { formatQuantity } from './format-quantity'

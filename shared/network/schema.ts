@@ -47,6 +47,7 @@ export const substrateSchema = z.looseObject({
   thickness: paramValue.optional(),
   lossTangent: paramValue.optional(),
   conductivity: paramValue.optional(),
+  roughness: paramValue.optional(),
 })
 
 const port = z.number({ error: 'a port must be a number' }).int('a port must be a whole number').min(1, 'ports count from 1')

@@ -43,6 +43,8 @@ export interface Substrate {
   thickness?: ParamValue
   lossTangent?: ParamValue
   conductivity?: ParamValue
+  /** RMS surface roughness of the conductor (m); Portwright's extension of the contract. */
+  roughness?: ParamValue
   [extra: string]: unknown
 }
 
@@ -121,6 +123,6 @@ export interface EvaluatedValue {
 export interface Evaluated {
   variables: Record<string, EvaluatedValue>
   blocks: Record<string, Record<string, EvaluatedValue>>
-  /** `referenceImpedance`, `sweep.start`, `sweep.stop`, `sweep.points`. */
+  /** `referenceImpedance`, `sweep.start`, `sweep.stop`, `sweep.points`, and `substrates.NAME.KEY` for each substrate value. */
   settings: Record<string, EvaluatedValue>
 }

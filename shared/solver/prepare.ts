@@ -5,6 +5,7 @@ import { evaluateParams, type ParamValues } from '../network/params'
 import { parseNetworkDocument } from '../network/schema'
 import { checkTopology } from '../network/topology'
 import type { Evaluated, NetworkDocument, Problem } from '../network/types'
+import { evaluateSubstrates } from '../network/substrates'
 import { evaluateVariables, type VariablesOutcome } from '../network/variables'
 import { BLOCK_MODELS, LATER_BLOCK_TYPES } from './blocks/registry'
 import { CompiledNetwork, type CompileBlock } from './compile'
@@ -12,7 +13,7 @@ import type { JoinOrder } from './join-order'
 import type { JoinPlanCache } from './plan-cache'
 import type { SweepSettings } from './sweep'
 import { resolveDataSet } from './resolve-data'
-import type { CreateContext, DataSet, NestedNetwork } from './types'
+import type { CreateContext, DataSet, NestedOutcome, SubstrateLookup } from './types'
 
 /** Loads the document a `subnetwork` block refers to; `trail` lists the references from the top document down. */
 export type SubnetworkResolver = (ref: string, trail: readonly string[]) => unknown
@@ -50,6 +51,8 @@ export interface PreparedNetwork {
   /** The document's sweep as evaluated; fields it does not give are absent. */
   sweep?: Partial<SweepSettings>
   compiled: CompiledNetwork
+  /** Block models used outside their published ranges, naming the block; `above` (Hz) as in `ModelNote`. */
+  notes: Array<Problem & { above?: number }>
 }
 
 /** Outcome of `prepareNetwork`: evaluated values are filled in even when other parts fail. */
@@ -90,6 +93,16 @@ function prepareAt(input: unknown, options: PrepareOptions, trail: readonly stri
 
   const referenceImpedance = evaluateReference(document, variables, evaluated, problems)
   const sweep = evaluateSweep(document, variables, evaluated, problems)
+  const substrates = evaluateSubstrates(document.substrates, variables.scope, variables.failed)
+  Object.assign(evaluated.settings, substrates.evaluated)
+  problems.push(...substrates.problems)
+  const substrate = (name: string): SubstrateLookup => {
+    const found = substrates.values.get(name)
+    if (found) return { ok: true, substrate: found }
+    if (substrates.failed.has(name)) return { ok: false, message: `substrate "${name}" has errors (see substrates.${name})` }
+    const known = Object.keys(document.substrates ?? {})
+    return { ok: false, message: known.length ? `"${name}" is not one of the document's substrates (${known.join(', ')})` : `"${name}" names no substrate: the document has none; add one under substrates` }
+  }
 
   const context = (blockId: string): CreateContext => ({
     blockId,
@@ -97,7 +110,9 @@ function prepareAt(input: unknown, options: PrepareOptions, trail: readonly stri
     buildNetwork: (doc, label) => nested(prepareAt(doc, { ...options, joinOrder: 'auto' }, trail, budget), label),
     resolveNetwork: ref => resolve(ref, options, trail, budget),
     resolveData: ref => resolveDataSet(ref, options.resolveData, trail),
+    substrate,
   })
+  const notes: PreparedNetwork['notes'] = []
 
   const compileBlocks: CompileBlock[] = []
   const terminals = new Map<string, number>()
@@ -131,6 +146,9 @@ function prepareAt(input: unknown, options: PrepareOptions, trail: readonly stri
       for (const p of created.problems) blockProblem(p.field, p.message)
       continue
     }
+    for (const note of created.notes ?? []) {
+      notes.push({ block: block.id, ...(note.field ? { field: note.field } : {}), ...(note.above !== undefined ? { above: note.above } : {}), message: `block ${block.id} (${block.type})${note.field ? `, ${note.field}` : ''}: ${note.message}` })
+    }
     terminals.set(block.id, created.instance.terminals)
     compileBlocks.push({ id: block.id, type: block.type, instance: created.instance })
   }
@@ -142,7 +160,7 @@ function prepareAt(input: unknown, options: PrepareOptions, trail: readonly stri
   return {
     ok: true,
     evaluated,
-    network: { document, ports: compiled.ports, impedances: compiled.impedances, blocks: compiled.blockCount, ...(sweep ? { sweep } : {}), compiled },
+    network: { document, ports: compiled.ports, impedances: compiled.impedances, blocks: compiled.blockCount, ...(sweep ? { sweep } : {}), compiled, notes },
   }
 }
 
@@ -182,12 +200,15 @@ function evaluateSweep(document: NetworkDocument, variables: VariablesOutcome, e
   return sweep
 }
 
-function nested(result: PrepareResult, label: string): { ok: true; network: NestedNetwork } | { ok: false; problems: Problem[] } {
-  if (result.ok) return { ok: true, network: result.network.compiled }
+function nested(result: PrepareResult, label: string): NestedOutcome {
+  if (result.ok) {
+    const notes = result.network.notes.map(({ message, above }) => ({ message: `in ${label}: ${message}`, ...(above !== undefined ? { above } : {}) }))
+    return { ok: true, network: result.network.compiled, notes }
+  }
   return { ok: false, problems: result.problems.map(p => ({ message: `in ${label}: ${p.message}` })) }
 }
 
-function resolve(ref: string, options: PrepareOptions, trail: readonly string[], budget: ExpansionBudget): { ok: true; network: NestedNetwork } | { ok: false; problems: Problem[] } {
+function resolve(ref: string, options: PrepareOptions, trail: readonly string[], budget: ExpansionBudget): NestedOutcome {
   if (trail.includes(ref)) return { ok: false, problems: [{ message: `network "${ref}" contains itself: ${[...trail, ref].join(' → ')}` }] }
   if (trail.length >= MAX_DEPTH) return { ok: false, problems: [{ message: `subnetworks are nested more than ${MAX_DEPTH} deep at "${ref}"` }] }
   if (!options.resolveSubnetwork) return { ok: false, problems: [{ message: `network "${ref}" cannot be loaded here (no subnetwork loader was given)` }] }

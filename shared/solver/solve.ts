@@ -13,7 +13,8 @@ export interface SolveResult {
 
 /**
  * Outcome of a solve: the result (with warnings about isolated frequencies where a resonance
- * is cut off from every port), or the problems (with frequency and blocks) that stopped it.
+ * is cut off from every port, and about block models used outside their published ranges),
+ * or the problems (with frequency and blocks) that stopped it.
  */
 export type SolveOutcome = { ok: true; result: SolveResult; warnings: Problem[] } | { ok: false; problems: Problem[] }
 
@@ -42,10 +43,11 @@ export function solveNetwork(network: PreparedNetwork, frequencies: Float64Array
   const im = options.output?.im.length === size ? options.output.im : new Float64Array(size)
   const compiled = network.compiled
   const result = { ports: n, impedances: [...network.impedances], frequencies, re, im }
-  if (compiled.solveFrequencies(frequencies, re, im)) return { ok: true, result, warnings: [] }
+  const notes = notesFor(network, frequencies)
+  if (compiled.solveFrequencies(frequencies, re, im)) return { ok: true, result, warnings: notes }
   if (!compiled.failedAsSingular()) return { ok: false, problems: [failureOf(compiled)] }
   // Slow path, only for sweeps that hit a singular frequency: one frequency at a time.
-  const warnings: Problem[] = []
+  const warnings: Problem[] = [...notes]
   const nn = n * n
   for (let k = 0; k < frequencies.length; k++) {
     const f = frequencies[k]!
@@ -58,6 +60,15 @@ export function solveNetwork(network: PreparedNetwork, frequencies: Float64Array
 }
 
 type Compiled = PreparedNetwork['compiled']
+
+/** Block models used outside their ranges at these frequencies, as warnings naming the block. */
+function notesFor(network: PreparedNetwork, frequencies: Float64Array): Problem[] {
+  let highest = -Infinity
+  for (const f of frequencies) highest = Math.max(highest, f)
+  return network.notes
+    .filter(note => note.above === undefined || highest > note.above)
+    .map(({ above: _above, ...problem }) => problem)
+}
 
 function failureOf(compiled: Compiled): Problem {
   return compiled.failure() ?? { message: 'the network cannot be solved' }

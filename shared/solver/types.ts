@@ -1,3 +1,4 @@
+import type { MicrostripSubstrate } from '../microstrip/types'
 import type { ParamSpec, ParamValues } from '../network/params'
 import type { Problem } from '../network/types'
 
@@ -57,15 +58,33 @@ export interface CreateContext {
   blockId: string
   referenceImpedance: number
   /** Builds a nested network from a document (for blocks made of other blocks). */
-  buildNetwork(document: unknown, label: string): { ok: true; network: NestedNetwork } | { ok: false; problems: Problem[] }
+  buildNetwork(document: unknown, label: string): NestedOutcome
   /** Resolves and builds a subnetwork by reference, through the caller's resolver. */
-  resolveNetwork(ref: string): { ok: true; network: NestedNetwork } | { ok: false; problems: Problem[] }
+  resolveNetwork(ref: string): NestedOutcome
   /** Loads a data set by reference, through the caller's resolver, checked for shape. */
   resolveData(ref: string): { ok: true; data: DataSet } | { ok: false; problems: Problem[] }
+  /** The document's substrate of that name, evaluated; a message naming the known ones when there is none. */
+  substrate(name: string): SubstrateLookup
+}
+
+/** A nested network built for a block, with the range warnings of the blocks inside it (messages say where). */
+export type NestedOutcome = { ok: true; network: NestedNetwork; notes: ModelNote[] } | { ok: false; problems: Problem[] }
+
+/** Outcome of looking up a substrate by name. */
+export type SubstrateLookup = { ok: true; substrate: MicrostripSubstrate } | { ok: false; message: string }
+
+/**
+ * A block model used outside its published range: the result is still given, with this warning.
+ * With `above` (Hz) it applies only when the sweep goes above that frequency.
+ */
+export interface ModelNote {
+  field?: string
+  message: string
+  above?: number
 }
 
 /** Result of building a block instance. Problem messages name the field but not the block; the caller adds it. */
-export type CreateOutcome = { ok: true; instance: BlockInstance } | { ok: false; problems: Array<{ field?: string; message: string }> }
+export type CreateOutcome = { ok: true; instance: BlockInstance; notes?: ModelNote[] } | { ok: false; problems: Array<{ field?: string; message: string }> }
 
 /** A block type: its parameters, cross-parameter checks and how to build its instance. */
 export interface BlockModel {

@@ -7,6 +7,7 @@
 export type BlockKind =
   | 'port' | 'line' | 'stub' | 'load' | 'series'
   | 'hybrid90' | 'hybrid180' | 'divider' | 'phase' | 'attenuator' | 'microstrip'
+  | 'microstripOpen' | 'microstripStep' | 'microstripBend'
 
 export type ParamValue = number | string
 
@@ -185,11 +186,42 @@ export const blockCatalog: Record<BlockKind, KindSpec> = {
       { param: 'length', label: 'Length', unit: 'm', required: true },
     ],
   },
+  microstripOpen: {
+    kind: 'microstripOpen', label: 'Microstrip open end', hint: 'Open end of a strip: its fringing field as a little extra length', idPrefix: 'OE',
+    width: 3, height: 2, terminals: [{ n: 1, x: 0, y: 1, side: 'left' }],
+    defaults: { width: '1.1 mm' },
+    fields: [
+      { param: 'substrate', label: 'Substrate', required: true },
+      { param: 'width', label: 'Width', unit: 'm', required: true },
+    ],
+  },
+  microstripStep: {
+    kind: 'microstripStep', label: 'Microstrip step', hint: 'Step in strip width: the parasitics where two widths meet', idPrefix: 'SW',
+    width: 4, height: 2, terminals: two(4, 2),
+    defaults: { width1: '1.1 mm', width2: '0.5 mm' },
+    fields: [
+      { param: 'substrate', label: 'Substrate', required: true },
+      { param: 'width1', label: 'Width at 1', unit: 'm', required: true },
+      { param: 'width2', label: 'Width at 2', unit: 'm', required: true },
+    ],
+  },
+  microstripBend: {
+    kind: 'microstripBend', label: 'Microstrip bend', hint: 'Right-angle bend of a strip, square or mitred corner', idPrefix: 'BD',
+    width: 3, height: 3,
+    terminals: [{ n: 1, x: 0, y: 1, side: 'left' }, { n: 2, x: 2, y: 3, side: 'bottom' }],
+    defaults: { width: '1.1 mm', corner: 'mitred' },
+    fields: [
+      { param: 'substrate', label: 'Substrate', required: true },
+      { param: 'width', label: 'Width', unit: 'm', required: true },
+      { param: 'corner', label: 'Corner', choices: ['square', 'mitred'], required: true },
+    ],
+  },
 }
 
 /** Block kinds in the order the block rail shows them. */
 export const railKinds: readonly BlockKind[] = [
   'port', 'line', 'stub', 'load', 'series', 'hybrid90', 'hybrid180', 'divider', 'phase', 'attenuator', 'microstrip',
+  'microstripOpen', 'microstripStep', 'microstripBend',
 ]
 
 /** The catalogue entry for a type, or undefined for a type the editor cannot draw. */

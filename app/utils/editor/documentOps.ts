@@ -6,6 +6,7 @@ import type { BlockSpec, NetworkDocument } from '~~/shared/network/types'
 import { blockCatalog, kindSpec, terminalCount, GRID, type BlockKind, type ParamValue } from './blockCatalog'
 import { orientedSize, turn, type Rotation } from './geometry'
 import { fitDefaults } from './blockDefaults'
+import { addSubstrate } from './substrateOps'
 
 export type Wire = [string, string]
 export interface Layout { x: number, y: number, rotation?: Rotation, flip?: boolean }
@@ -55,9 +56,9 @@ export function addBlock(doc: NetworkDocument, kind: BlockKind, at: { x: number,
   const params: Record<string, ParamValue> = { ...spec.defaults }
   fitDefaults(params, doc)
   if (kind === 'port') params.index = nextPortIndex(doc)
-  if (kind === 'microstrip') {
-    const first = Object.keys(doc.substrates ?? {})[0]
-    if (first) params.substrate = first
+  if (kind === 'microstrip' || kind === 'microstripOpen' || kind === 'microstripStep' || kind === 'microstripBend') {
+    // The block needs a substrate to be solved: use the first one, or start one the settings panel can edit.
+    params.substrate = Object.keys(doc.substrates ?? {})[0] ?? addSubstrate(doc)
   }
   doc.blocks.push({ id, type: kind, params, layout: { x: at.x, y: at.y, rotation: 0, flip: false } } as BlockSpec)
   return id

@@ -32,6 +32,9 @@ export function nodeLabel(type: string, p: Params, values?: Record<string, strin
       parts.push(p.end !== undefined ? String(p.end) : undefined, show(p, values, 'resistance', ' Ω'), show(p, values, 'inductance', ' H'), show(p, values, 'capacitance', ' F'))
       break
     case 'microstrip': parts.push(show(p, values, 'width', ' m'), show(p, values, 'length', ' m')); break
+    case 'microstripOpen': parts.push(show(p, values, 'width', ' m')); break
+    case 'microstripStep': parts.push(`${show(p, values, 'width1', ' m') ?? '?'} → ${show(p, values, 'width2', ' m') ?? '?'}`); break
+    case 'microstripBend': parts.push(show(p, values, 'width', ' m'), p.corner !== undefined ? String(p.corner) : undefined); break
   }
   return parts.filter(Boolean).join(' · ')
 }

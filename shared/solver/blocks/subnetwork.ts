@@ -11,6 +11,8 @@ export const subnetworkModel: BlockModel = {
     const network = resolved.network
     return {
       ok: true,
+      // Blocks inside that are used outside their models' ranges warn through this block.
+      notes: resolved.notes,
       instance: {
         terminals: network.ports,
         refs: Float64Array.from(network.impedances),

@@ -92,7 +92,8 @@ describe('topology errors name the culprit', () => {
   it('unknown block type, and types of a later version', () => {
     expect(messages(base([p1, { id: 'Q', type: 'resonator', params: {} }], [['P1.1', 'Q.1']]))[0]).toMatch(/^block Q: unknown block type "resonator" \(known types: port, line, /)
     expect(messages(base([p1, { id: 'D', type: 'data', params: { file: 'x.s2p' } }], [['P1.1', 'D.1']]))).toEqual(['block D (data), file: data set "x.s2p" cannot be loaded here (no data loader was given)'])
-    expect(messages(base([p1, { id: 'M', type: 'microstrip', params: {} }], [['P1.1', 'M.1']]))).toEqual(['block M: type "microstrip" is not available in this version of Portwright yet'])
+    // A microstrip is solved now; without the substrate it names, the problem says so.
+    expect(messages(base([p1, { id: 'M', type: 'microstrip', params: { substrate: 'core', width: '1 mm', length: '10 mm' } }], [['P1.1', 'M.1']]))).toEqual(['block M (microstrip), substrate: "core" names no substrate: the document has none; add one under substrates'])
   })
 
   it('duplicate block ids', () => {
