@@ -6,7 +6,7 @@
 
 export type BlockKind =
   | 'port' | 'line' | 'stub' | 'load' | 'series'
-  | 'hybrid90' | 'hybrid180' | 'divider' | 'phase' | 'attenuator' | 'microstrip'
+  | 'hybrid90' | 'hybrid180' | 'divider' | 'phase' | 'attenuator' | 'microstrip' | 'coupled'
 
 export type ParamValue = number | string
 
@@ -66,6 +66,9 @@ const lineFields: FieldSpec[] = [
   { param: 'velocityFactor', label: 'Velocity factor', placeholder: '1', when: physical },
   { param: 'lossDb', label: 'Loss per wavelength', unit: 'dB', placeholder: '0' },
 ]
+
+// Length fields of a line without its impedance (coupled lines give two impedances instead).
+const lengthFields = lineFields.filter(f => f.param !== 'impedance')
 
 const rlcFields: FieldSpec[] = [
   { param: 'resistance', label: 'Resistance', unit: 'Ω', placeholder: '0' },
@@ -131,6 +134,22 @@ export const blockCatalog: Record<BlockKind, KindSpec> = {
       { param: 'couplingDb', label: 'Coupling', unit: 'dB', placeholder: '3.0103' },
     ],
   },
+  coupled: {
+    kind: 'coupled', label: 'Coupled lines', hint: 'Coupled-line section: 1 in, 2 through, 3 coupled (beside 1), 4 isolated (beside 2)', idPrefix: 'CP',
+    width: 4, height: 4,
+    terminals: [
+      { n: 1, name: 'in', x: 0, y: 1, side: 'left' },
+      { n: 2, name: 'through', x: 4, y: 1, side: 'right' },
+      { n: 3, name: 'coupled', x: 0, y: 3, side: 'left' },
+      { n: 4, name: 'isolated', x: 4, y: 3, side: 'right' },
+    ],
+    defaults: { evenImpedance: 69.37, oddImpedance: 36.04, degrees: 90, at: '1 GHz' },
+    fields: [
+      { param: 'evenImpedance', label: 'Even-mode impedance', unit: 'Ω', required: true },
+      { param: 'oddImpedance', label: 'Odd-mode impedance', unit: 'Ω', required: true },
+      ...lengthFields,
+    ],
+  },
   hybrid180: {
     kind: 'hybrid180', label: '180° hybrid', hint: 'Ring hybrid: 1 sum, 2 and 3 outputs, 4 difference', idPrefix: 'HR',
     width: 4, height: 4,
@@ -189,7 +208,7 @@ export const blockCatalog: Record<BlockKind, KindSpec> = {
 
 /** Block kinds in the order the block rail shows them. */
 export const railKinds: readonly BlockKind[] = [
-  'port', 'line', 'stub', 'load', 'series', 'hybrid90', 'hybrid180', 'divider', 'phase', 'attenuator', 'microstrip',
+  'port', 'line', 'stub', 'load', 'series', 'hybrid90', 'coupled', 'hybrid180', 'divider', 'phase', 'attenuator', 'microstrip',
 ]
 
 /** The catalogue entry for a type, or undefined for a type the editor cannot draw. */
