@@ -28,6 +28,6 @@ export function designTransformer(ask: TransformerAsk): NetworkDocument {
     blocks,
     wires,
     span: 0.95,
-    conditions: [{ measure: 'returnLoss', port: 1, min: tidy(-20 * Math.log10(gm)) }],
+    conditions: [{ measure: 'returnLoss', port: 1, min: Number((-20 * Math.log10(gm)).toFixed(2)) }],
   })
 }
