@@ -49,17 +49,18 @@ export function designDivider(ask: DividerAsk): NetworkDocument {
   }
   const ratio = 10 ** (ratioDb / 10)
   const loss2 = 10 * Math.log10((1 + ratio) / ratio), loss3 = 10 * Math.log10(1 + ratio)
+  const split: SpecCondition[] = equal
+    ? [{ measure: 'amplitudeImbalance', from: 1, to: [2, 3], max: 0.5 }]
+    : [
+        { measure: 'insertionLoss', from: 1, to: 2, min: tidy(loss2 - 0.5), max: tidy(loss2 + 0.5) },
+        { measure: 'insertionLoss', from: 1, to: 3, min: tidy(loss3 - 0.5), max: tidy(loss3 + 0.5) },
+      ]
   const conditions: SpecCondition[] = [
     { measure: 'returnLoss', port: 1, min: 20 },
     { measure: 'returnLoss', port: 2, min: 20 },
     { measure: 'returnLoss', port: 3, min: 20 },
     { measure: 'isolation', from: 2, to: 3, min: 20 },
-    ...(equal
-      ? [{ measure: 'amplitudeImbalance', from: 1, to: [2, 3], max: 0.5 } as const]
-      : [
-          { measure: 'insertionLoss', from: 1, to: 2, min: tidy(loss2 - 0.5), max: tidy(loss2 + 0.5) } as const,
-          { measure: 'insertionLoss', from: 1, to: 3, min: tidy(loss3 - 0.5), max: tidy(loss3 + 0.5) } as const,
-        ]),
+    ...split,
     { measure: 'phaseDifference', from: 1, to: [2, 3], target: 0, tolerance: 5 },
   ]
   return finishDesign({

@@ -114,7 +114,9 @@ export function isDesignKind(word: string): word is DesignKind {
 
 function readOption(option: DesignOption, text: string): { ok: true; value: number | string } | { ok: false; message: string } {
   if (option.kind === 'choice') {
-    return option.choices!.includes(text) ? { ok: true, value: text } : { ok: false, message: `must be ${option.choices!.join(' or ')} (got "${text}")` }
+    const choices = option.choices!
+    const words = choices.length > 2 ? `${choices.slice(0, -1).join(', ')} or ${choices.at(-1)}` : choices.join(' or ')
+    return choices.includes(text) ? { ok: true, value: text } : { ok: false, message: `must be ${words} (got "${text}")` }
   }
   const numeric = Number(text)
   const outcome = evaluateQuantity(text.trim() !== '' && Number.isFinite(numeric) ? numeric : text, option.kind, new Map())

@@ -1,8 +1,7 @@
 import type { SpecCondition } from '../rf/spec-mask'
 import type { BlockSpec, NetworkDocument, Wire } from '../network/types'
 import { branchLineSections } from './branch-line-sections'
-import { finishDesign, lineBlock, portBlock, STEP, timesZ0 } from './document-parts'
-import { frequencyText, tidy } from './document-parts'
+import { finishDesign, frequencyText, lineBlock, portBlock, STEP, tidy, timesZ0 } from './document-parts'
 import type { QuadratureAsk } from './types'
 
 /** Equal split: 10·log10(2) dB to the coupled port. */
@@ -38,15 +37,16 @@ export function designQuadrature(ask: QuadratureAsk): NetworkDocument {
   })
   const equal = Math.abs(couplingDb - EQUAL_SPLIT_DB) < 1e-6
   const throughDb = -10 * Math.log10(1 - c * c)
+  const split: SpecCondition[] = equal
+    ? [{ measure: 'amplitudeImbalance', from: 1, to: [2, 3], max: 0.5 }]
+    : [
+        { measure: 'insertionLoss', from: 1, to: 2, min: tidy(throughDb - 0.5), max: tidy(throughDb + 0.5) },
+        { measure: 'coupling', from: 1, to: 3, min: tidy(couplingDb - 0.5), max: tidy(couplingDb + 0.5) },
+      ]
   const conditions: SpecCondition[] = [
     { measure: 'returnLoss', port: 1, min: 20 },
     { measure: 'isolation', from: 1, to: 4, min: 20 },
-    ...(equal
-      ? [{ measure: 'amplitudeImbalance', from: 1, to: [2, 3], max: 0.5 } as const]
-      : [
-          { measure: 'insertionLoss', from: 1, to: 2, min: tidy(throughDb - 0.5), max: tidy(throughDb + 0.5) } as const,
-          { measure: 'coupling', from: 1, to: 3, min: tidy(couplingDb - 0.5), max: tidy(couplingDb + 0.5) } as const,
-        ]),
+    ...split,
     { measure: 'phaseDifference', from: 1, to: [2, 3], target: 90, tolerance: 5 },
   ]
   return finishDesign({
