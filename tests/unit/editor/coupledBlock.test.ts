@@ -1,6 +1,8 @@
 import { describe, expect, it } from 'vitest'
 import { blockCatalog, railKinds } from '../../../app/utils/editor/blockCatalog'
+import { addBlock } from '../../../app/utils/editor/documentOps'
 import { nodeLabel } from '../../../app/utils/editor/nodeLabel'
+import type { NetworkDocument } from '../../../shared/network/types'
 import { BLOCK_MODELS, prepareNetwork } from '../../../shared/solver/index'
 
 describe('coupled block in the editor', () => {
@@ -24,6 +26,15 @@ describe('coupled block in the editor', () => {
       wires: [1, 2, 3, 4].map(i => [`P${i}.1`, `CP1.${i}`]),
     }
     expect(prepareNetwork(document).ok).toBe(true)
+  })
+
+  it('placing one from the rail marks the document as version 1.1 (the contract adds `coupled` in 1.1)', () => {
+    const document: NetworkDocument = { format: 'portwright.network', version: 1, blocks: [], wires: [] }
+    addBlock(document, 'line', { x: 0, y: 0 })
+    expect(document.version).toBe(1)
+    const id = addBlock(document, 'coupled', { x: 200, y: 0 })
+    expect(id).toBe('CP1')
+    expect(document.version).toBe(1.1)
   })
 
   it('labels the node with both mode impedances and the length', () => {
