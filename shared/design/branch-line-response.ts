@@ -31,26 +31,30 @@ export function branchLineResponse(branches: readonly number[], series: readonly
 type Complex = [number, number]
 
 // ABCD of the half circuit, each stub a shunt admittance j·y·k (k = tan(θ/2) open, −cot(θ/2) short).
+// Entries kept as scalars (aR + j·aI …): this runs thousands of times while arms are chosen.
 function halfCircuit(branches: readonly number[], series: readonly number[], theta: number, k: number): { gamma: Complex; t: Complex } {
-  let m: Complex[] = [[1, 0], [0, 0], [0, 0], [1, 0]]
+  let aR = 1, aI = 0, bR = 0, bI = 0, cR = 0, cI = 0, dR = 1, dI = 0
   const cos = Math.cos(theta), sin = Math.sin(theta)
-  const times = (n: Complex[]) => {
-    const [a, b, c, d] = m
-    const mul = (x: Complex, y: Complex): Complex => [x[0] * y[0] - x[1] * y[1], x[0] * y[1] + x[1] * y[0]]
-    const add = (x: Complex, y: Complex): Complex => [x[0] + y[0], x[1] + y[1]]
-    m = [add(mul(a!, n[0]!), mul(b!, n[2]!)), add(mul(a!, n[1]!), mul(b!, n[3]!)), add(mul(c!, n[0]!), mul(d!, n[2]!)), add(mul(c!, n[1]!), mul(d!, n[3]!))]
-  }
-  branches.forEach((y, i) => {
-    times([[1, 0], [0, 0], [0, y * k], [1, 0]])
+  for (let i = 0; i < branches.length; i++) {
+    // × [[1, 0], [j·y·k, 1]]: a += b·jyk, c += d·jyk.
+    const yk = branches[i]! * k
+    aR -= bI * yk; aI += bR * yk
+    cR -= dI * yk; cI += dR * yk
     const z = series[i]
-    if (z !== undefined) times([[cos, 0], [0, z * sin], [0, sin / z], [cos, 0]])
-  })
-  const [a, b, c, d] = m as [Complex, Complex, Complex, Complex]
-  const den: Complex = [a[0] + b[0] + c[0] + d[0], a[1] + b[1] + c[1] + d[1]]
-  const dd = den[0] * den[0] + den[1] * den[1]
-  const num: Complex = [a[0] + b[0] - c[0] - d[0], a[1] + b[1] - c[1] - d[1]]
+    if (z === undefined) continue
+    // × [[cos, j·z·sin], [j·sin/z, cos]].
+    const zs = z * sin, ys = sin / z
+    const naR = aR * cos - bI * ys, naI = aI * cos + bR * ys
+    const nbR = -aI * zs + bR * cos, nbI = aR * zs + bI * cos
+    const ncR = cR * cos - dI * ys, ncI = cI * cos + dR * ys
+    const ndR = -cI * zs + dR * cos, ndI = cR * zs + dI * cos
+    aR = naR; aI = naI; bR = nbR; bI = nbI; cR = ncR; cI = ncI; dR = ndR; dI = ndI
+  }
+  const denR = aR + bR + cR + dR, denI = aI + bI + cI + dI
+  const dd = denR * denR + denI * denI
+  const numR = aR + bR - cR - dR, numI = aI + bI - cI - dI
   return {
-    gamma: [(num[0] * den[0] + num[1] * den[1]) / dd, (num[1] * den[0] - num[0] * den[1]) / dd],
-    t: [(2 * den[0]) / dd, (-2 * den[1]) / dd],
+    gamma: [(numR * denR + numI * denI) / dd, (numI * denR - numR * denI) / dd],
+    t: [(2 * denR) / dd, (-2 * denI) / dd],
   }
 }

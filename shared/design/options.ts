@@ -58,6 +58,13 @@ export const DESIGN_ASSISTANTS: Readonly<Record<DesignKind, Assistant>> = {
       { name: 'coupling-db', label: 'Coupling to port 3', kind: 'decibel', required: false, min: 1, max: 15, placeholder: '3.0103' },
       { name: 'sections', label: 'Sections', kind: 'choice', required: false, choices: ['1', '2', '3'], placeholder: '1' },
     ],
+    check(v) {
+      // Two sections at 10 dB already need outer branches of 6.2·Z0; weaker coupling only gets worse.
+      const db = v['coupling-db'] as number | undefined
+      return db !== undefined && db > 10 && v.sections !== undefined && v.sections !== '1'
+        ? [{ option: 'coupling-db', message: `must be at most 10 dB with ${v.sections} sections (weaker coupling needs branch lines far above 3·Z0); use one section` }]
+        : []
+    },
     design: v => designQuadrature({ frequency: v.frequency as number, impedance: v.impedance as number, couplingDb: v['coupling-db'] as number | undefined, sections: v.sections === undefined ? 1 : (Number(v.sections) as 1 | 2 | 3) }),
   },
   'ring': {
