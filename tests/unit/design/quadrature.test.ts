@@ -71,3 +71,19 @@ describe('quadrature assistant', () => {
     expect(widths[2]).toBeGreaterThan(1.5 * widths[1]!)
   })
 })
+
+describe('fast branch-line response used to choose the arms', () => {
+  it('equals the full solve of the placed lines at every frequency (even/odd modes, Pozar, 4th ed., §7.5)', async () => {
+    const { branchLineResponse } = await import('../../../shared/design/branch-line-response')
+    const c = 10 ** (-6 / 20)
+    const arms = branchLineSections(c, 3)
+    const r = solveDesign(designQuadrature({ frequency: F0, impedance: 50, couplingDb: 6, sections: 3 }), 41)
+    r.frequencies.forEach((f, k) => {
+      const fast = branchLineResponse(arms.branches.map(z => 1 / z), arms.series, f / F0)
+      expect(fast.s11).toBeCloseTo(abs(entry(r, 1, 1, k)), 8)
+      expect(fast.s21).toBeCloseTo(abs(entry(r, 2, 1, k)), 8)
+      expect(fast.s31).toBeCloseTo(abs(entry(r, 3, 1, k)), 8)
+      expect(fast.s41).toBeCloseTo(abs(entry(r, 4, 1, k)), 8)
+    })
+  })
+})
