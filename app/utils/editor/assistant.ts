@@ -14,8 +14,10 @@ import { layoutOf } from './documentOps'
 /** One spec condition and how it fares over the design's spec band (or at the centre). */
 export interface ConditionSummary {
   text: string
-  /** Smallest margin over the band: ≥ 0 holds (dB, ratio or degrees as the condition). */
+  /** Smallest margin over the band: ≥ 0 holds, in `unit`. */
   worstMargin: number
+  /** ' dB', '°' or '' (a VSWR margin is a plain ratio). */
+  unit: string
 }
 
 /** What the dialog shows before placing. */
@@ -49,7 +51,8 @@ export function previewDesign(kind: DesignKind, inputs: Record<string, string>):
     const margin = conditionMargin(solved.result, condition)
     let worst = Infinity
     margin.forEach((m, k) => { if (inBand(k)) worst = Math.min(worst, m) })
-    return { text: describeCondition(condition), worstMargin: worst }
+    const unit = condition.measure === 'phaseDifference' ? '°' : condition.measure === 'vswr' ? '' : ' dB'
+    return { text: describeCondition(condition), worstMargin: worst, unit }
   })
   const found = findBandwidth(solved.result, spec)
   return {

@@ -136,12 +136,12 @@ export const blockCatalog: Record<BlockKind, KindSpec> = {
   },
   coupled: {
     kind: 'coupled', label: 'Coupled lines', hint: 'Coupled-line section: 1 in, 2 through, 3 coupled (beside 1), 4 isolated (beside 2)', idPrefix: 'CP',
-    width: 4, height: 4,
+    width: 4, height: 6,
     terminals: [
       { n: 1, name: 'in', x: 0, y: 1, side: 'left' },
       { n: 2, name: 'through', x: 4, y: 1, side: 'right' },
-      { n: 3, name: 'coupled', x: 0, y: 3, side: 'left' },
-      { n: 4, name: 'isolated', x: 4, y: 3, side: 'right' },
+      { n: 3, name: 'coupled', x: 0, y: 5, side: 'left' },
+      { n: 4, name: 'isolated', x: 4, y: 5, side: 'right' },
     ],
     defaults: { evenImpedance: 69.37, oddImpedance: 36.04, degrees: 90, at: '1 GHz' },
     fields: [

@@ -56,9 +56,9 @@ export function expectOwnIds(document: NetworkDocument): void {
   }
 }
 
-/** No two blocks' layout boxes overlap (footprints from the editor catalogue: port 40×40, line 80×40, series 80×40, four-port 80×80). */
+/** No two blocks' layout boxes overlap (footprints from the editor catalogue: port 40×40, line 80×40, series 80×40, four-port 80×80, coupled lines 80×120). */
 export function expectNoOverlap(document: NetworkDocument): void {
-  const size: Record<string, [number, number]> = { port: [40, 40], line: [80, 40], series: [80, 40], coupled: [80, 80] }
+  const size: Record<string, [number, number]> = { port: [40, 40], line: [80, 40], series: [80, 40], coupled: [80, 120] }
   const boxes = document.blocks.map((b) => {
     const [w, h] = size[b.type] ?? [80, 80]
     const turned = b.layout?.rotation === 90 || b.layout?.rotation === 270

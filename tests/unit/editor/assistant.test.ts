@@ -16,6 +16,8 @@ describe('design assistant dialog (pure parts)', () => {
     expect(preview.reach!.fractional).toBeGreaterThanOrEqual(preview.band!.fractional)
     expect(preview.conditions.map(c => c.text)).toContain('return loss at port 1 ≥ 20 dB')
     for (const c of preview.conditions) expect(c.worstMargin).toBeGreaterThanOrEqual(0)
+    expect(preview.conditions.find(c => c.text.startsWith('phase'))!.unit).toBe('°')
+    expect(preview.conditions.find(c => c.text.startsWith('return loss'))!.unit).toBe(' dB')
   })
 
   it('names the option for bad or missing input; blank fields count as not given', () => {
