@@ -21,11 +21,12 @@ export function designCoupledLine(ask: CoupledLineAsk): NetworkDocument {
     frequency: ask.frequency,
     impedance: ask.impedance,
     blocks: [
-      // The block's terminals sit 20 px and 100 px below its top: ports level with them.
+      // The block's terminals sit 20 px and 100 px below its top: ports level with them, the
+      // right-hand ones clear of the block's label, which the editor draws beside a tall block.
       portBlock('Pt1', 1, 0, 0),
       portBlock('Pt3', 3, 0, 80),
-      portBlock('Pt2', 2, 3 * STEP, 0, true),
-      portBlock('Pt4', 4, 3 * STEP, 80, true),
+      portBlock('Pt2', 2, 4 * STEP, 0, true),
+      portBlock('Pt4', 4, 4 * STEP, 80, true),
       { id: 'Cp1', type: 'coupled', params: { evenImpedance: timesZ0(modes.even), oddImpedance: timesZ0(modes.odd), degrees: 90, at: 'f0' }, layout: { x: STEP + 20, y: 0 } },
     ],
     wires: [['Pt1.1', 'Cp1.1'], ['Cp1.2', 'Pt2.1'], ['Pt3.1', 'Cp1.3'], ['Cp1.4', 'Pt4.1']],
