@@ -6,7 +6,7 @@
 
 export type BlockKind =
   | 'port' | 'line' | 'stub' | 'load' | 'series'
-  | 'hybrid90' | 'hybrid180' | 'divider' | 'phase' | 'attenuator' | 'microstrip'
+  | 'hybrid90' | 'hybrid180' | 'divider' | 'phase' | 'attenuator' | 'microstrip' | 'coupled'
   | 'microstripOpen' | 'microstripStep' | 'microstripBend'
 
 export type ParamValue = number | string
@@ -67,6 +67,9 @@ const lineFields: FieldSpec[] = [
   { param: 'velocityFactor', label: 'Velocity factor', placeholder: '1', when: physical },
   { param: 'lossDb', label: 'Loss per wavelength', unit: 'dB', placeholder: '0' },
 ]
+
+// Length fields of a line without its impedance (coupled lines give two impedances instead).
+const lengthFields = lineFields.filter(f => f.param !== 'impedance')
 
 const rlcFields: FieldSpec[] = [
   { param: 'resistance', label: 'Resistance', unit: 'Ω', placeholder: '0' },
@@ -130,6 +133,22 @@ export const blockCatalog: Record<BlockKind, KindSpec> = {
       { param: 'model', label: 'Model', choices: ['ideal', 'branch'], required: true },
       { param: 'at', label: 'Quarter wave at', unit: 'Hz', when: notIdeal },
       { param: 'couplingDb', label: 'Coupling', unit: 'dB', placeholder: '3.0103' },
+    ],
+  },
+  coupled: {
+    kind: 'coupled', label: 'Coupled lines', hint: 'Coupled-line section: 1 in, 2 through, 3 coupled (beside 1), 4 isolated (beside 2)', idPrefix: 'CP',
+    width: 4, height: 6,
+    terminals: [
+      { n: 1, name: 'in', x: 0, y: 1, side: 'left' },
+      { n: 2, name: 'through', x: 4, y: 1, side: 'right' },
+      { n: 3, name: 'coupled', x: 0, y: 5, side: 'left' },
+      { n: 4, name: 'isolated', x: 4, y: 5, side: 'right' },
+    ],
+    defaults: { evenImpedance: 69.37, oddImpedance: 36.04, degrees: 90, at: '1 GHz' },
+    fields: [
+      { param: 'evenImpedance', label: 'Even-mode impedance', unit: 'Ω', required: true },
+      { param: 'oddImpedance', label: 'Odd-mode impedance', unit: 'Ω', required: true },
+      ...lengthFields,
     ],
   },
   hybrid180: {
@@ -220,7 +239,7 @@ export const blockCatalog: Record<BlockKind, KindSpec> = {
 
 /** Block kinds in the order the block rail shows them. */
 export const railKinds: readonly BlockKind[] = [
-  'port', 'line', 'stub', 'load', 'series', 'hybrid90', 'hybrid180', 'divider', 'phase', 'attenuator', 'microstrip',
+  'port', 'line', 'stub', 'load', 'series', 'hybrid90', 'coupled', 'hybrid180', 'divider', 'phase', 'attenuator', 'microstrip',
   'microstripOpen', 'microstripStep', 'microstripBend',
 ]
 

@@ -61,6 +61,8 @@ export function addBlock(doc: NetworkDocument, kind: BlockKind, at: { x: number,
     params.substrate = Object.keys(doc.substrates ?? {})[0] ?? addSubstrate(doc)
   }
   doc.blocks.push({ id, type: kind, params, layout: { x: at.x, y: at.y, rotation: 0, flip: false } } as BlockSpec)
+  // Coupled lines are a block type of contract 1.1; a document using one says so.
+  if (kind === 'coupled') doc.version = 1.1
   return id
 }
 

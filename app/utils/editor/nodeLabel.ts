@@ -22,6 +22,9 @@ export function nodeLabel(type: string, p: Params, values?: Record<string, strin
     case 'line': case 'stub':
       parts.push(show(p, values, 'impedance', ' Ω'), length(p, values))
       break
+    case 'coupled':
+      parts.push(show(p, values, 'evenImpedance', ' Ω'), show(p, values, 'oddImpedance', ' Ω'), length(p, values))
+      break
     case 'port': parts.push(show(p, values, 'impedance', ' Ω')); break
     case 'hybrid90': case 'hybrid180': case 'divider':
       parts.push(p.model === 'ideal' || p.model === undefined ? 'ideal' : `${p.model} at ${show(p, values, 'at', ' Hz') ?? '?'}`)

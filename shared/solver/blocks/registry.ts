@@ -1,5 +1,6 @@
 import type { BlockModel } from '../types'
 import { attenuatorModel } from './attenuator'
+import { coupledModel } from './coupled'
 import { dataModel } from './data'
 import { dividerModel } from './divider'
 import { hybrid180Model } from './hybrid180'
@@ -25,6 +26,7 @@ export const BLOCK_MODELS: Readonly<Record<string, BlockModel>> = Object.fromEnt
     loadModel,
     seriesModel,
     hybrid90Model,
+    coupledModel,
     hybrid180Model,
     dividerModel,
     phaseModel,

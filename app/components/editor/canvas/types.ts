@@ -20,6 +20,7 @@ export type StubNodeData = Typed<{ impedance?: Param, degrees?: Param, at?: Para
 export type LoadNodeData = Typed<{ resistance?: Param, inductance?: Param, capacitance?: Param, end?: Param }>
 export type SeriesNodeData = LoadNodeData
 export type Hybrid90NodeData = Typed<{ impedance?: Param, model?: Param, at?: Param, couplingDb?: Param }>
+export type CoupledNodeData = Typed<{ evenImpedance?: Param, oddImpedance?: Param, degrees?: Param, at?: Param, length?: Param, velocityFactor?: Param, lossDb?: Param }>
 export type Hybrid180NodeData = Typed<{ impedance?: Param, model?: Param, at?: Param }>
 export type DividerNodeData = Typed<{ impedance?: Param, model?: Param, at?: Param, ratioDb?: Param }>
 export type PhaseNodeData = Typed<{ impedance?: Param, degrees?: Param }>

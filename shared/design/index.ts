@@ -1,0 +1,10 @@
+/** Design assistants: from a few asked values to a network document of line-level blocks with its spec. */
+export { designCoupledLine, coupledLineModes } from './coupled-line'
+export { designDivider, dividerArms } from './divider'
+export { designQuadrature, EQUAL_SPLIT_DB } from './quadrature'
+export { designRing } from './ring'
+export { designTransformer, DEFAULT_MAX_REFLECTION } from './transformer'
+export { binomialBandwidth, binomialSections, chebyshev, chebyshevBandwidth, chebyshevSections } from './transformer-sections'
+export { branchLineSections, matchedWidth } from './branch-line-sections'
+export { DESIGN_ASSISTANTS, DESIGN_KINDS, isDesignKind, runDesign, type DesignOption, type OptionProblem } from './options'
+export type { CoupledLineAsk, DesignKind, DividerAsk, QuadratureAsk, RingAsk, TransformerAsk } from './types'
