@@ -3,6 +3,7 @@ import { dirname, join } from 'node:path'
 import { Piscina } from 'piscina'
 import summariseInProcess, { type SummaryTask } from '../workers/solve-summary'
 import solveApiInProcess, { type ApiSolveTask } from '../workers/solve-api'
+import readTouchstoneInProcess, { type ReadTouchstoneOutcome, type ReadTouchstoneTask } from '../workers/read-touchstone'
 import type { SnapshotSummary } from '../../shared/review/snapshot-summary'
 import type { ApiSolveOutcome } from '../../shared/automation/api-solve'
 
@@ -10,6 +11,8 @@ import type { ApiSolveOutcome } from '../../shared/automation/api-solve'
 export const SOLVE_WORKER_FILE = 'workers/solve-summary.mjs'
 /** File name of the bundled automation-API solve worker. */
 export const API_SOLVE_WORKER_FILE = 'workers/solve-api.mjs'
+/** File name of the bundled Touchstone reader (uploads, and stored files read again for the editor). */
+export const READ_TOUCHSTONE_WORKER_FILE = 'workers/read-touchstone.mjs'
 
 const envNumber = (name: string, fallback: number): number => {
   const value = Number(process.env[name])
@@ -72,7 +75,12 @@ export function solveApiInPool(task: ApiSolveTask): Promise<ApiSolveOutcome> {
   return runInPool(API_SOLVE_WORKER_FILE, task, solveApiInProcess)
 }
 
-async function runInPool<T, R>(file: string, task: T, inProcess: (task: T) => R): Promise<R> {
+/** A Touchstone file read in the pool, within the same budget, so a large upload never holds the event loop. */
+export function readTouchstoneInPool(task: ReadTouchstoneTask): Promise<ReadTouchstoneOutcome> {
+  return runInPool(READ_TOUCHSTONE_WORKER_FILE, task, readTouchstoneInProcess, 'file')
+}
+
+async function runInPool<T, R>(file: string, task: T, inProcess: (task: T) => R, what: 'network' | 'file' = 'network'): Promise<R> {
   const workers = usePool(file)
   if (!workers) return inProcess(task)
   const { timeMs, memoryMb } = solveBudget()
@@ -80,13 +88,16 @@ async function runInPool<T, R>(file: string, task: T, inProcess: (task: T) => R)
     return await workers.run(task, { signal: AbortSignal.timeout(timeMs) }) as R
   } catch (error) {
     const e = error as Error & { code?: string; name?: string }
+    const [doing, advice] = what === 'network'
+      ? ['to solve', 'Make the sweep shorter or the network smaller and try again.']
+      : ['to read', 'Send a smaller file (fewer frequencies or ports) and try again.']
     if (e.name === 'AbortError' || e.name === 'TimeoutError' || /aborted/i.test(e.message)) {
-      throw overBudget(`The network took longer than ${timeMs / 1000} s to solve on the server, so it was stopped. Make the sweep shorter or the network smaller and try again.`)
+      throw overBudget(`The ${what} took longer than ${timeMs / 1000} s ${doing} on the server, so it was stopped. ${advice}`)
     }
     if (e.code === 'ERR_WORKER_OUT_OF_MEMORY' || /out of memory/i.test(e.message)) {
-      throw overBudget(`The network needed more than ${memoryMb} MB to solve on the server, so it was stopped. Make the sweep shorter or the network smaller and try again.`)
+      throw overBudget(`The ${what} needed more than ${memoryMb} MB ${doing} on the server, so it was stopped. ${advice}`)
     }
-    if (/queue is full/i.test(e.message)) throw createError({ statusCode: 503, message: 'The server is solving too many networks at once; try again in a moment.' })
+    if (/queue is full/i.test(e.message)) throw createError({ statusCode: 503, message: `The server is busy with too many ${what}s at once; try again in a moment.` })
     throw error
   }
 }

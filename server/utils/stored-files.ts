@@ -1,9 +1,7 @@
 import type { H3Event } from 'h3'
 import { z } from 'zod'
 import { Network, StoredFile, User } from '../database/models'
-import { TouchstoneError } from '../../shared/touchstone/error'
 import { TOUCHSTONE_LIMITS } from '../../shared/touchstone/limits'
-import { portsFromFileName, readTouchstone } from '../../shared/touchstone/read'
 import type { TouchstoneFile } from '../../shared/touchstone/types'
 import type { StoredFileDto, StoredFileSummary } from '../../shared/types/api'
 
@@ -19,7 +17,7 @@ export interface CheckedUpload {
 
 /**
  * Reads the multipart field `file` and checks it at the door: size, a `.sNp` name of plain characters,
- * and content that reads as a Touchstone file whose ports match the name. 400/413 in the user's words otherwise.
+ * and content that reads as a Touchstone file whose ports match the name (read in the worker pool). 400/413 in the user's words otherwise.
  */
 export async function readTouchstoneUpload(event: H3Event): Promise<CheckedUpload> {
   const parts = await readMultipartFormData(event).catch(() => {
@@ -34,14 +32,12 @@ export async function readTouchstoneUpload(event: H3Event): Promise<CheckedUploa
   if (!FILE_NAME.test(name)) {
     throw createError({ statusCode: 400, message: 'The file name must end in .sNp (such as amp.s2p) and use letters, digits, spaces, dots, dashes, underscores or brackets, at most 120 characters.' })
   }
-  let parsed: TouchstoneFile
-  try {
-    parsed = readTouchstone(part.data.toString('latin1'), { ports: portsFromFileName(name) })
-  } catch (error) {
-    if (error instanceof TouchstoneError) throw createError({ statusCode: 400, message: `${name} is not a Touchstone file we can read: line ${error.line}: ${error.reason}.` })
+  const read = await readTouchstoneInPool({ name, text: part.data.toString('latin1') }).catch((error) => {
+    if (error && typeof error === 'object' && 'statusCode' in error) throw error
     throw createError({ statusCode: 400, message: `${name} could not be read as a Touchstone file.` })
-  }
-  return { name, data: part.data, parsed }
+  })
+  if (!read.ok) throw createError({ statusCode: 400, message: `${name} is not a Touchstone file we can read: line ${read.line}: ${read.reason}.` })
+  return { name, data: part.data, parsed: read.file }
 }
 
 /** What the Files list shows of a read file. */
