@@ -80,7 +80,7 @@ describe('data files and sub-networks in the editor', () => {
     await page.waitForSelector('[data-testid="terminal-D1.2"]')
     expect(await page.$('[data-testid="terminal-D1.3"]')).toBeNull()
     expect(await page.textContent('[data-testid="data-summary-ports"]')).toBe('2')
-    expect(await page.textContent('[data-testid="data-summary"]')).toContain('2 GHz to 2.9 GHz')
+    expect(await page.textContent('[data-testid="data-summary"]')).toContain('2.000 GHz to 2.900 GHz')
     await page.waitForSelector('[data-testid="data-preview"] canvas')
     await page.selectOption('[data-testid="connect-D1.1"]', 'P1.1')
     await page.selectOption('[data-testid="connect-D1.2"]', 'P2.1')
@@ -91,7 +91,7 @@ describe('data files and sub-networks in the editor', () => {
     // The page's solve read back through the results table equals the library's, to its printed digits.
     await page.click('[data-testid="view-tab-table"]')
     await page.waitForSelector('[data-testid="results-table"]')
-    const shown = await tableRow('2.45 GHz')
+    const shown = await tableRow('2.450 GHz')
     const document = { ...twoPorts, blocks: [...twoPorts.blocks, { id: 'D1', type: 'data', params: { file: 'amp.s2p' } }], wires: [['D1.1', 'P1.1'], ['D1.2', 'P2.1']] }
     const solved = solveDocument(document, { resolveData: () => readTouchstone(ampText, { ports: 2 }), sweep: { start: 2.45e9, stop: 2.45e9, points: 1 } })
     if (!solved.ok) throw new Error(JSON.stringify(solved.problems))
