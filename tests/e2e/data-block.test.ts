@@ -130,4 +130,29 @@ describe('data files and sub-networks in the editor', () => {
     await expect.poll(() => page.textContent('[data-testid="solve-problems"]').catch(() => ''), { timeout: 20_000 }).toContain('Loop B → Loop A → Loop B')
     await screenshot(page, 'data-block-cycle')
   })
+
+  it('opens the demo balanced amplifier read-only for a reviewer, matched where one stage is not', async () => {
+    // Ines reviews the demo project: no rail, the data file cannot be changed, the page still solves.
+    await close()
+    const browser = await launchBrowser()
+    page = browser.page
+    close = browser.close
+    await page.setViewportSize({ width: 1500, height: 950 })
+    await signIn(page, 'ines@quillmere.example', 'quillmere-demo-2026')
+    await page.goto(appUrl('/'))
+    await page.click('text=Balanced LNA hybrids')
+    await page.click('text=Balanced amplifier (invented LNA data)')
+    await page.waitForSelector('[data-testid="results-fresh"]:has-text("2-port")')
+    expect(await page.$('[data-testid="block-rail"]')).toBeNull()
+    await page.click('[data-testid="block-AMP_A"]')
+    await page.waitForSelector('[data-testid="data-summary"]')
+    expect(await page.isDisabled('[data-testid="data-file-select"]')).toBe(true)
+    await page.waitForSelector('[data-testid="data-preview"] canvas')
+    await screenshot(page, 'data-block-balanced')
+    await page.click('[data-testid="view-tab-table"]')
+    const shown = await tableRow('2.450 GHz')
+    // Ideal hybrids around two equal stages: the reflections cancel at the input (derived by hand), the gain stays 15 dB.
+    expect(shown['S11 dB']).toBeLessThan(-6 - 15)
+    expect(shown['S21 dB']).toBeCloseTo(15, 0)
+  })
 })
