@@ -18,6 +18,7 @@ import { fileForm, newSignedInUser, TEST_PASSWORD } from '../support/http'
 let page: Page
 let close: () => Promise<void>
 let projectId = ''
+let owner: Awaited<ReturnType<typeof newSignedInUser>>['client']
 const ids: Record<string, string> = {}
 const ampText = writeTouchstone(inventedAmplifier(), { format: 'DB', unit: 'GHZ' })
 
@@ -53,12 +54,13 @@ async function tableRow(frequency: string): Promise<Record<string, number>> {
 describe('data files and sub-networks in the editor', () => {
   beforeAll(async () => {
     const { client, email } = await newSignedInUser('Data Block Tester')
+    owner = client
     const project = await client.post('/api/projects', { name: `Measured parts ${Date.now()}` })
     expect(project.status).toBe(201)
     projectId = project.body.id
     const upload = await client.request('POST', `/api/projects/${projectId}/files`, fileForm('amp.s2p', ampText))
     expect(upload.status).toBe(201)
-    for (const [name, document] of [['Amplifier check', twoPorts], ['Inner pad', pad], ['Loop A', loop('Loop B')], ['Loop B', loop('Loop A')]] as const) {
+    for (const [name, document] of [['Amplifier check', twoPorts], ['Inner pad', pad], ['Loop A', loop('Loop B')], ['Loop B', loop('Loop A')], ['Pad inside', pad], ['Pad outside', loop('Pad inside')]] as const) {
       const answer = await client.post(`/api/projects/${projectId}/networks`, { name, document })
       expect(answer.status).toBe(201)
       ids[name] = answer.body.id
@@ -129,6 +131,20 @@ describe('data files and sub-networks in the editor', () => {
     await page.goto(appUrl(`/projects/${projectId}/networks/${ids['Loop A']}`))
     await expect.poll(() => page.textContent('[data-testid="solve-problems"]').catch(() => ''), { timeout: 20_000 }).toContain('Loop B → Loop A → Loop B')
     await screenshot(page, 'data-block-cycle')
+  })
+
+  it('solves through a sub-network, and again with its edit after Read again', async () => {
+    await page.goto(appUrl(`/projects/${projectId}/networks/${ids['Pad outside']}`))
+    await page.waitForSelector('[data-testid="results-fresh"]:has-text("2-port")')
+    await page.click('[data-testid="view-tab-table"]')
+    // A matched 3 dB pad inside: S21 = −3 dB (the attenuator's definition).
+    await expect.poll(async () => (await tableRow('2.450 GHz'))['S21 dB']).toBeCloseTo(-3, 2)
+    const inner = await owner.get(`/api/projects/${projectId}/networks/${ids['Pad inside']}`)
+    const edited = { ...inner.body.document, blocks: inner.body.document.blocks.map((b: { id: string }) => (b.id === 'PAD' ? { ...b, params: { db: 6 } } : b)) }
+    expect((await owner.put(`/api/projects/${projectId}/networks/${ids['Pad inside']}`, { document: edited, revision: inner.body.revision })).status).toBe(200)
+    await page.click('[data-testid="block-SN1"]')
+    await page.click('[data-testid="subnetwork-refresh"]')
+    await expect.poll(async () => (await tableRow('2.450 GHz'))['S21 dB']).toBeCloseTo(-6, 2)
   })
 
   it('opens the demo balanced amplifier read-only for a reviewer, matched where one stage is not', async () => {
