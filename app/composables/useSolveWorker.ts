@@ -8,6 +8,7 @@ import { onBeforeUnmount, ref, shallowRef } from 'vue'
 import type { Evaluated, NetworkDocument, Problem } from '~~/shared/network/types'
 import type { SolveReply, SolvedData } from '~~/app/workers/protocol'
 import type { DataSet } from '~~/shared/solver/types'
+import { subnetworkRefs } from '~~/app/utils/editor/externalTerminals'
 
 export interface SolveState {
   result: SolvedData | null
@@ -21,17 +22,29 @@ export interface SolveState {
   resultSeq: number
 }
 
-/** File names of the document's data blocks. */
-function dataNames(document: NetworkDocument): string[] {
+/** File names of the data blocks of these documents. */
+function dataNames(documents: Iterable<NetworkDocument>): string[] {
   const names = new Set<string>()
-  for (const block of document.blocks ?? []) {
-    const file = (block.params as Record<string, unknown> | undefined)?.file
-    if (block.type === 'data' && typeof file === 'string') names.add(file)
+  for (const document of documents) {
+    for (const block of document.blocks ?? []) {
+      const file = (block.params as Record<string, unknown> | undefined)?.file
+      if (block.type === 'data' && typeof file === 'string') names.add(file)
+    }
   }
   return [...names]
 }
 
-export function useSolveWorker(options: { debounceMs?: number, loadData?: (name: string) => Promise<DataSet | undefined> } = {}) {
+/** Where the worker gets the documents of sub-networks: loaded before a solve that needs them. */
+export interface SubnetworkSource {
+  /** Loads every document the given one uses as a sub-network, theirs in turn. */
+  load(document: NetworkDocument): Promise<void>
+  /** Loaded documents by reference (null: could not be loaded); a new map after a refresh. */
+  documents(): ReadonlyMap<string, NetworkDocument | null>
+  /** Forget what was loaded. */
+  refresh(): void
+}
+
+export function useSolveWorker(options: { debounceMs?: number, loadData?: (name: string) => Promise<DataSet | undefined>, subnetworks?: SubnetworkSource } = {}) {
   const debounceMs = options.debounceMs ?? 0
   const result = shallowRef<SolvedData | null>(null)
   const stale = ref(false)
@@ -49,9 +62,13 @@ export function useSolveWorker(options: { debounceMs?: number, loadData?: (name:
   const loaded = new Map<string, DataSet | null>()
   const workerHas = new Set<string>()
   let loading = false
+  // The sub-network documents the worker has: the map they came from and its size then.
+  let sentNetworks: { map: ReadonlyMap<string, NetworkDocument | null>, size: number } | null = null
+  let lastDocument: NetworkDocument | null = null
 
   function start(): Worker {
     workerHas.clear()
+    sentNetworks = null
     const w = new Worker(new URL('../workers/solve.worker.ts', import.meta.url), { type: 'module' })
     w.onmessage = (event: MessageEvent<SolveReply>) => receive(event.data)
     w.onerror = (event) => {
@@ -67,7 +84,16 @@ export function useSolveWorker(options: { debounceMs?: number, loadData?: (name:
 
   function send() {
     if (!pending || inFlight || loading) return
-    const names = options.loadData ? dataNames(pending) : []
+    const inner = options.subnetworks
+    if (inner && subnetworkRefs(pending).some(r => !inner.documents().has(r))) {
+      // Sub-networks first (their data blocks need loading too), then everything else.
+      loading = true
+      busy.value = true
+      inner.load(pending).catch(() => {}).finally(() => { loading = false; send() })
+      return
+    }
+    const innerDocs = inner ? [...inner.documents().values()].filter((d): d is NetworkDocument => d !== null) : []
+    const names = options.loadData ? dataNames([pending, ...innerDocs]) : []
     const missing = names.filter(name => !loaded.has(name))
     if (missing.length) {
       // Load first, then send the newest document; a failed load is reported by the solver as not found.
@@ -87,7 +113,14 @@ export function useSolveWorker(options: { debounceMs?: number, loadData?: (name:
       const data = loaded.get(name)
       if (data && !workerHas.has(name)) { dataSets[name] = data; workerHas.add(name) }
     }
-    worker.postMessage({ seq: ++latest, document, ...(Object.keys(dataSets).length ? { dataSets } : {}) })
+    let networks: Record<string, NetworkDocument> | undefined
+    const docs = inner?.documents()
+    if (docs && (sentNetworks?.map !== docs || sentNetworks.size !== docs.size)) {
+      networks = {}
+      for (const [ref, doc] of docs) if (doc) networks[ref] = doc
+      sentNetworks = { map: docs, size: docs.size }
+    }
+    worker.postMessage({ seq: ++latest, document, ...(Object.keys(dataSets).length ? { dataSets } : {}), ...(networks ? { networks } : {}) })
   }
 
   function receive(reply: SolveReply) {
@@ -111,9 +144,18 @@ export function useSolveWorker(options: { debounceMs?: number, loadData?: (name:
   function request(document: NetworkDocument) {
     for (const [name, data] of loaded) if (data === null) loaded.delete(name)
     pending = document
+    lastDocument = document
     clearTimeout(timer)
     if (debounceMs > 0) timer = setTimeout(send, debounceMs)
     else send()
+  }
+
+  /** Read sub-networks and data files again (they may have been edited elsewhere) and solve once more. */
+  function refresh() {
+    options.subnetworks?.refresh()
+    loaded.clear()
+    workerHas.clear()
+    if (lastDocument) request(lastDocument)
   }
 
   onBeforeUnmount(() => {
@@ -122,5 +164,5 @@ export function useSolveWorker(options: { debounceMs?: number, loadData?: (name:
     worker = null
   })
 
-  return { result, stale, problems, evaluated, busy, solveMs, resultSeq, request }
+  return { result, stale, problems, evaluated, busy, solveMs, resultSeq, request, refresh }
 }

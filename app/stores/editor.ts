@@ -12,7 +12,7 @@ import type { Quantity } from '~~/app/utils/editor/traces'
 import type { PlotBand } from '~~/app/utils/editor/plotTypes'
 import { GRID } from '~~/app/utils/editor/blockCatalog'
 import {
-  addBlock as addBlockOp, connect as connectOp, disconnect, extractFragment, flipBlocks, moveBlocks as moveBlocksOp,
+  addBlock as addBlockOp, addExternalBlock as addExternalBlockOp, connect as connectOp, disconnect, extractFragment, flipBlocks, moveBlocks as moveBlocksOp,
   nudgeBlocks, pasteFragment, pruneWires, removeBlocks, renameBlock as renameBlockOp, rotateBlocks, setLengthMode as setLengthModeOp,
   setParam as setParamOp, wireKey, type Fragment, type Wire,
 } from '~~/app/utils/editor/documentOps'
@@ -165,6 +165,13 @@ export const useEditorStore = defineStore('editor', () => {
     if (id) select([id])
     return id
   }
+  /** Place a data block or sub-network naming its file or network; selects it. */
+  function addExternal(type: 'data' | 'subnetwork', ref: string, at: { x: number, y: number }): string | undefined {
+    let id: string | undefined
+    edit((d) => { id = addExternalBlockOp(d, type, ref, at) })
+    if (id) select([id])
+    return id
+  }
   function connect(a: string, b: string): boolean {
     let ok = false
     edit((d) => { ok = connectOp(d, a, b) })
@@ -283,7 +290,7 @@ export const useEditorStore = defineStore('editor', () => {
   return {
     results, addMarker, moveMarker, removeMarker, setMarkers,
     doc, version, lastOrigin, history, selection, readOnly, clipboard, selectedBlocks, selectedBlock,
-    load, replaceDocument, edit, select, selectAll, selectNext,
+    load, replaceDocument, edit, select, addExternal, selectAll, selectNext,
     addBlock, connect, removeWires, deleteSelection, rotateSelection, flipSelection, moveBlocks, nudgeSelection,
     setParam, setLengthMode, renameBlock, copySelection, paste, duplicateSelection,
     setName, setReferenceImpedance, setSweep, setVariable, renameVariable, removeVariable,

@@ -7,6 +7,8 @@ export interface SolveRequest {
   document: NetworkDocument
   /** Data sets of `data` blocks by file name, sent once each; the worker keeps them. */
   dataSets?: Record<string, DataSet>
+  /** Documents of sub-networks by the reference blocks use; when given, they replace what the worker had. */
+  networks?: Record<string, NetworkDocument>
 }
 
 /** The S-parameters as the worker sends them (arrays are transferred, not copied). */

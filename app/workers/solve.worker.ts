@@ -8,11 +8,14 @@ import type { SolveReply, SolveRequest } from './protocol'
 const plans = new JoinPlanCache()
 // Data sets of data blocks, by file name, as the editor sent them.
 const dataSets = new Map<string, DataSet>()
+// Documents of sub-networks by name, as the editor loaded them from the project.
+let networks = new Map<string, unknown>()
 
 function solve(request: SolveRequest): { reply: SolveReply, transfer: Transferable[] } {
   const t0 = performance.now()
   for (const [name, data] of Object.entries(request.dataSets ?? {})) dataSets.set(name, data)
-  const prepared = prepareNetwork(request.document, { plans, resolveData: name => dataSets.get(name) })
+  if (request.networks) networks = new Map(Object.entries(request.networks))
+  const prepared = prepareNetwork(request.document, { plans, resolveData: name => dataSets.get(name), resolveSubnetwork: ref => networks.get(ref) })
   const base = { seq: request.seq, evaluated: prepared.evaluated ?? null }
   if (!prepared.ok) return { reply: { ...base, problems: prepared.problems, result: null, solveMs: performance.now() - t0 }, transfer: [] }
   const sweep = resolveSweep(prepared.network.sweep)

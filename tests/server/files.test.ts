@@ -1,6 +1,6 @@
 // Project data files: Touchstone uploads checked at the door, listed, downloaded, replaced and deleted.
 import { beforeAll, describe, expect, it } from 'vitest'
-import { fileForm, newSignedInUser } from '../support/http'
+import { fileForm, newSignedInUser, signedIn } from '../support/http'
 
 // Our own invented two-port: a matched 6 dB pad at 1–3 GHz (|S21| = 0.5), Touchstone 1.1, MA.
 const PAD = '! Quillmere pad\n# GHZ S MA R 50\n1 0 0 0.5 0 0.5 0 0 0\n2 0 0 0.5 -10 0.5 -10 0 0\n3 0 0 0.5 -20 0.5 -20 0 0\n'
@@ -101,5 +101,16 @@ describe('project files', () => {
     expect((await owner.client.delete(`/api/projects/${projectId}/networks/${network.body.id}`)).status).toBe(200)
     expect((await owner.client.delete(`${base}/${id}`)).status).toBe(200)
     expect((await owner.client.get(base)).body).toEqual([])
+  })
+
+  it('the demo project of balanced amplifiers holds the invented data files and the networks that use them', async () => {
+    // Read only: the demo database is shared by the test files.
+    const tomas = await signedIn('tomas@quillmere.example', 'quillmere-demo-2026')
+    const projects = (await tomas.get('/api/projects')).body as Array<{ id: string; name: string }>
+    const demo = projects.find(p => p.name === 'Balanced LNA hybrids')!
+    const files = (await tomas.get(`/api/projects/${demo.id}/files`)).body as Array<{ name: string; summary: { ports: number; points: number } }>
+    expect(files.map(f => [f.name, f.summary.ports, f.summary.points]).sort()).toEqual([['bandpass-invented.s2p', 2, 201], ['lna-invented.s2p', 2, 91]])
+    const networks = (await tomas.get(`/api/projects/${demo.id}/networks`)).body as Array<{ name: string }>
+    expect(networks.map(n => n.name)).toEqual(expect.arrayContaining(['Balanced amplifier (invented LNA data)', 'Single amplifier (invented LNA data)']))
   })
 })

@@ -66,6 +66,16 @@ export function addBlock(doc: NetworkDocument, kind: BlockKind, at: { x: number,
   return id
 }
 
+/** Add a data block (its `file`) or a sub-network (its `network`) at a canvas position; returns its id. */
+export function addExternalBlock(doc: NetworkDocument, type: 'data' | 'subnetwork', ref: string, at: { x: number, y: number }): string {
+  const id = freshId(type === 'data' ? 'D' : 'SN', new Set(doc.blocks.map(b => b.id)))
+  const params: Record<string, ParamValue> = type === 'data' ? { file: ref } : { network: ref }
+  doc.blocks.push({ id, type, params, layout: { x: at.x, y: at.y, rotation: 0, flip: false } } as BlockSpec)
+  // Data blocks came with contract 1.1; a document using one says so.
+  if (type === 'data' && doc.version < 1.1) doc.version = 1.1
+  return id
+}
+
 /** Whether `ref` names an existing terminal of the document. */
 export function terminalExists(doc: NetworkDocument, ref: string): boolean {
   const t = parseTerminal(ref)

@@ -6,6 +6,10 @@ import type { BlockSpec, NetworkDocument } from '~~/shared/network/types'
 import { GRID, kindSpec, type Side } from './blockCatalog'
 import { layoutOf, parseTerminal, wireCount, wireKey, type Wire } from './documentOps'
 import { orientedSize, placeTerminal, type Rotation } from './geometry'
+import { externalShape, type ExternalPorts } from './externalTerminals'
+
+/** Ports of a data or subnetwork block when the editor knows them. */
+export type ExternalPortsOf = (block: BlockSpec) => ExternalPorts | undefined
 
 /** A terminal as the canvas draws it, in pixels within the node box. */
 export interface PlacedTerminal {
@@ -73,9 +77,11 @@ function genericTerminals(block: BlockSpec, doc: NetworkDocument) {
 /** Build the canvas node for one block. */
 export function blockNode(
   block: BlockSpec, order: number, doc: NetworkDocument,
-  ctx: { counts: Map<string, number>, selected: ReadonlySet<string>, problems: Record<string, string>, readOnly: boolean, position?: { x: number, y: number } },
+  ctx: { counts: Map<string, number>, selected: ReadonlySet<string>, problems: Record<string, string>, readOnly: boolean, position?: { x: number, y: number }, external?: ExternalPortsOf },
 ): FlowNode {
-  const spec = kindSpec(block.type)
+  const ports = ctx.external?.(block)
+  // Data files and sub-networks: as many terminals as the file or inner network has ports, once known.
+  const spec = ports ? externalShape(ports) : kindSpec(block.type)
   const layout = layoutOf(block, order)
   const terminals = spec?.terminals ?? genericTerminals(block, doc)
   const w = spec?.width ?? 4
@@ -83,7 +89,7 @@ export function blockNode(
   const size = orientedSize(w, h, layout.rotation)
   return {
     id: block.id,
-    type: spec ? block.type : 'generic',
+    type: spec && !ports ? block.type : 'generic',
     position: ctx.position ?? { x: layout.x, y: layout.y },
     selected: ctx.selected.has(block.id),
     draggable: !ctx.readOnly,
@@ -111,7 +117,7 @@ export function blockNode(
 /** Build every node; `dragging` overrides positions of blocks being dragged (not yet committed to the document). */
 export function documentNodes(
   doc: NetworkDocument,
-  opts: { selected: ReadonlySet<string>, problems: Record<string, string>, readOnly: boolean, dragging?: Record<string, { x: number, y: number }> },
+  opts: { selected: ReadonlySet<string>, problems: Record<string, string>, readOnly: boolean, dragging?: Record<string, { x: number, y: number }>, external?: ExternalPortsOf },
 ): FlowNode[] {
   const counts = wireCount(doc)
   return doc.blocks.map((b, i) => blockNode(b, i, doc, { ...opts, counts, position: opts.dragging?.[b.id] }))
