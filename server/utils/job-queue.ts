@@ -1,5 +1,5 @@
 import type PgBoss from 'pg-boss'
-import { PLAN_QUEUE, openQueue, type PlanMessage } from '../jobs/queue'
+import { CHUNK_QUEUE, PLAN_QUEUE, chunkMessageId, openQueue, type PlanMessage } from '../jobs/queue'
 import type { Job } from '../database/models'
 import type { JobDto } from '../../shared/types/jobs'
 
@@ -20,6 +20,21 @@ function useQueue(): Promise<PgBoss> {
 export async function enqueueJob(jobId: string): Promise<void> {
   const boss = await useQueue()
   await boss.send(PLAN_QUEUE, { jobId } satisfies PlanMessage, { id: jobId, retryLimit: 5, retryDelay: 2, expireInSeconds: 60 })
+}
+
+/**
+ * Takes a cancelled job's waiting messages off the queue, so workers need not pick each up only to drop it.
+ * Best effort: a message left behind is dropped by the worker that takes it, as the job is no longer running.
+ */
+export async function dequeueJob(jobId: string, chunkCount: number): Promise<void> {
+  try {
+    const boss = await useQueue()
+    await boss.cancel(PLAN_QUEUE, jobId)
+    const ids = Array.from({ length: chunkCount }, (_, i) => chunkMessageId(jobId, i))
+    for (let i = 0; i < ids.length; i += 500) await boss.cancel(CHUNK_QUEUE, ids.slice(i, i + 500))
+  } catch (error) {
+    console.warn(`[jobs] could not take job ${jobId} off the queue: ${(error as Error).message}`)
+  }
 }
 
 /** The plain answer for one job. */

@@ -161,7 +161,9 @@ describe('the job queue', () => {
     expect(tooLong.status).toBe(400)
     expect(tooLong.body.message).toMatch(/maxEvaluations must be at most 20,000/)
     expect((await viewer.client.post(path, { kind: 'tolerance', trials: 10, seed: 1 })).status).toBe(403)
-    const plain = await owner.client.post(`${base}/networks`, { name: 'No spec' })
+    const { spec: _spec, ...withoutSpec } = document
+    const plain = await owner.client.post(`${base}/networks`, { name: 'No spec', document: withoutSpec })
+    expect(plain.status, JSON.stringify(plain.body)).toBe(201)
     const refused = await owner.client.post(`${base}/networks/${plain.body.id}/jobs`, { kind: 'tolerance', trials: 10, seed: 1 })
     expect(refused.status).toBe(422)
     expect(refused.body.message).toMatch(/spec/)
