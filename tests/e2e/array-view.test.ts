@@ -56,6 +56,7 @@ describe('array view', () => {
     expect(await page.$$eval('[data-testid="array-polar"] [data-polar-trace]', ps => ps.length)).toBe(4)
     expect(await page.$('[data-testid="array-cartesian"] canvas')).not.toBeNull()
     expect(await page.$('[data-testid="array-peak-sweep"] canvas')).not.toBeNull()
+    await page.locator('[data-testid="array-figures"]').scrollIntoViewIfNeeded()
     await screenshot(page, 'array-view')
 
     // Other choices are saved with the network and come back on a reload.
