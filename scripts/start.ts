@@ -4,6 +4,7 @@ import { prepareDatabase } from './lib/database-setup'
 import { buildIfStale } from './lib/build'
 import { sessionSecret } from './lib/secret'
 import { startServer, stopProcess } from './lib/server-process'
+import { startQueueWorkers, stopQueueWorkers, workerCount } from './lib/queue-workers'
 import { demoAccountsWithPublishedPassword, demoRefusal, isLoopback } from './lib/demo-safety'
 
 // Everything the start command keeps lives in the git-ignored .data folder.
@@ -40,13 +41,16 @@ async function main() {
     }
     buildIfStale(root)
     const server = await startServer(root, { NUXT_DATABASE_URL: url, NUXT_SESSION_PASSWORD: secret }, port, host)
+    // Long tolerance and optimisation runs go to queue workers beside the server (more can run on other machines).
+    const workers = startQueueWorkers(root, { NUXT_DATABASE_URL: url }, workerCount())
+    if (workers.length) console.log(`Started ${workers.length} queue worker${workers.length === 1 ? '' : 's'} for long runs.`)
     console.log(`\nPortwright is running at http://${host === '0.0.0.0' ? '127.0.0.1' : host}:${port}/  (Ctrl-C stops it and its database)\n`)
     let stopping = false
     const shutdown = async () => {
       if (stopping) return
       stopping = true
       console.log('Stopping Portwright…')
-      await stopProcess(server)
+      await Promise.all([stopProcess(server), stopQueueWorkers(workers)])
       stopDatabase()
       process.exit(0)
     }
@@ -56,8 +60,10 @@ async function main() {
       // Ctrl-C in a terminal signals the whole process group, the server included.
       if (stopping || signal === 'SIGINT' || signal === 'SIGTERM') return void shutdown()
       console.error(`The app server stopped unexpectedly (code ${code}).`)
-      stopDatabase()
-      process.exit(1)
+      void stopQueueWorkers(workers).finally(() => {
+        stopDatabase()
+        process.exit(1)
+      })
     })
   } catch (error) {
     stopDatabase()

@@ -1,4 +1,4 @@
-import { readdirSync, statSync } from 'node:fs'
+import { readdirSync, readFileSync, statSync } from 'node:fs'
 import { join, relative } from 'node:path'
 import { beforeAll, describe, expect, it } from 'vitest'
 import { ApiClient, fileForm, newSignedInUser, signedIn, TEST_PASSWORD } from '../support/http'
@@ -193,6 +193,17 @@ const policy: Record<string, RouteCase> = {
       return { path: `/api/projects/${f.projectId}/networks/${f.networkId}/checkpoints/${checkpointId}/restore`, body: { revision: current.body.revision } }
     },
   },
+  'GET /api/projects/:projectId/networks/:networkId/jobs': { rule: 'viewer', prepare: async f => ({ path: `${await jobsNetwork(f)}/jobs` }) },
+  'POST /api/projects/:projectId/networks/:networkId/jobs': {
+    rule: 'editor',
+    prepare: async (f) => {
+      const base = await jobsNetwork(f)
+      await cancelUnfinishedJobs(f, base)
+      return { path: `${base}/jobs`, body: { kind: 'tolerance', trials: 10, seed: 1 } }
+    },
+  },
+  'GET /api/projects/:projectId/networks/:networkId/jobs/:jobId': { rule: 'viewer', prepare: async f => ({ path: `${await jobsNetwork(f)}/jobs/${await ownerJob(f)}` }) },
+  'POST /api/projects/:projectId/networks/:networkId/jobs/:jobId/cancel': { rule: 'editor', prepare: async f => ({ path: `${await jobsNetwork(f)}/jobs/${await ownerJob(f)}/cancel` }) },
   'DELETE /api/projects/:projectId/networks/:networkId': {
     rule: 'editor',
     prepare: async (f) => {
@@ -228,6 +239,34 @@ async function throwawayProject(f: Fixture): Promise<string> {
     await f.owner.post(`/api/projects/${made.body.id}/members`, { email, role })
   }
   return made.body.id
+}
+
+let jobsNetworkPath: string | undefined
+
+/** A network of the matrix project with a spec, tunables and tolerances, which the queue accepts runs of. */
+async function jobsNetwork(f: Fixture): Promise<string> {
+  if (jobsNetworkPath) return jobsNetworkPath
+  const document = JSON.parse(readFileSync(join(process.cwd(), 'shared/examples/branch-line-tolerances.json'), 'utf8'))
+  const made = await f.owner.post(`/api/projects/${f.projectId}/networks`, { name: 'Matrix queue network', document })
+  expect(made.status, JSON.stringify(made.body)).toBe(201)
+  return jobsNetworkPath = `/api/projects/${f.projectId}/networks/${made.body.id}`
+}
+
+/** Cancels the network's waiting runs, so the project's limit on unfinished runs never answers instead of the gate. */
+async function cancelUnfinishedJobs(f: Fixture, base: string): Promise<void> {
+  const list = await f.owner.get(`${base}/jobs`)
+  for (const job of list.body as Array<{ id: string; state: string }>) {
+    if (job.state === 'queued' || job.state === 'running') await f.owner.post(`${base}/jobs/${job.id}/cancel`, {})
+  }
+}
+
+/** A fresh run sent by the owner (no worker runs in this file, so it waits in the queue). */
+async function ownerJob(f: Fixture): Promise<string> {
+  const base = await jobsNetwork(f)
+  await cancelUnfinishedJobs(f, base)
+  const sent = await f.owner.post(`${base}/jobs`, { kind: 'tolerance', trials: 10, seed: 1 })
+  expect(sent.status, JSON.stringify(sent.body)).toBe(201)
+  return sent.body.id
 }
 
 /** The matrix network's newest history checkpoint, after a save by the owner makes sure there is one. */

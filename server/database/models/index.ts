@@ -19,6 +19,8 @@ import { PasswordReset } from './PasswordReset'
 import { AccessToken } from './AccessToken'
 import { AccessTokenProject } from './AccessTokenProject'
 import { NetworkCheckpoint } from './NetworkCheckpoint'
+import { Job } from './Job'
+import { JobChunk } from './JobChunk'
 
 export { User, Project, Membership, Network, Snapshot, Comment, StoredFile, AuditEvent }
 export { Invitation, Review, ReviewReviewer, ReviewEvent, OutboxMessage }
@@ -26,6 +28,7 @@ export { NetworkLiveState, NetworkUpdate }
 export { AccountSession, PasswordReset }
 export { AccessToken, AccessTokenProject }
 export { NetworkCheckpoint }
+export { Job, JobChunk }
 
 /** Binds every model to one Sequelize instance. */
 export function setupModels(sequelize: Sequelize): void {
@@ -37,4 +40,5 @@ export function setupModels(sequelize: Sequelize): void {
   for (const model of [AccountSession, PasswordReset]) model.setup(sequelize)
   for (const model of [AccessToken, AccessTokenProject]) model.setup(sequelize)
   NetworkCheckpoint.setup(sequelize)
+  for (const model of [Job, JobChunk]) model.setup(sequelize)
 }
