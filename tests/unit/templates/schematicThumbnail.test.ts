@@ -52,4 +52,16 @@ describe('schematicThumbnail', () => {
       expect(thumb.wires.length, template.slug).toBe(document.wires.length)
     }
   })
+
+  it('finds no two blocks of a template on top of each other', () => {
+    for (const template of TEMPLATES) {
+      const blocks = schematicThumbnail(template.build()).blocks
+      for (const [i, p] of blocks.entries()) {
+        for (const q of blocks.slice(i + 1)) {
+          const overlap = p.x < q.x + q.width && q.x < p.x + p.width && p.y < q.y + q.height && q.y < p.y + p.height
+          expect(overlap, `${template.slug}: ${p.id} and ${q.id}`).toBe(false)
+        }
+      }
+    }
+  })
 })
