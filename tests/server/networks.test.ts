@@ -1,5 +1,6 @@
 import { beforeAll, describe, expect, it } from 'vitest'
 import { newSignedInUser } from '../support/http'
+import { TEMPLATES } from '../../shared/templates/index'
 
 const doc = (name: string, extra: Record<string, unknown> = {}) => ({
   format: 'portwright.network',
@@ -95,6 +96,20 @@ describe('networks', () => {
     const answer = await owner.client.put(`${base}/${made.body.id}`, { document: doc('x') })
     expect(answer.status).toBe(400)
     expect(answer.body.data.fields.revision).toBeTruthy()
+  })
+
+  it('creates a network from every template, keeping its spec, tunables and tolerances; a viewer may not', async () => {
+    const viewer = await newSignedInUser('Network Viewer')
+    const projectId = base.split('/')[3]
+    await owner.client.post(`/api/projects/${projectId}/members`, { email: viewer.email, role: 'viewer' })
+    for (const template of TEMPLATES) {
+      const document = template.build()
+      const made = await editor.client.post(base, { name: document.name, document })
+      expect(made.status, template.slug).toBe(201)
+      expect(made.body.document).toEqual(document)
+    }
+    const refused = await viewer.client.post(base, { name: 'Not mine', document: TEMPLATES[0]!.build() })
+    expect(refused.status).toBe(403)
   })
 
   it('deletes a network', async () => {
