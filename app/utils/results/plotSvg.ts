@@ -19,6 +19,8 @@ export interface PlotSvgOptions {
   ink?: string
   grid?: string
   background?: string
+  /** Prefix of the picture's element ids, unique per page when several plots share one. @default 'plot' */
+  idPrefix?: string
 }
 
 // The product's slate ink and laminate-paper grid, as files exported alone cannot read the app's tokens.
@@ -77,12 +79,13 @@ export function plotSvg(plot: ShownPlot, options: PlotSvgOptions = {}): string {
   const yRange = plot.yRange ?? extent(plot, 'y')
   const y2Range = plot.y2Range ?? extent(plot, 'y2')
   const toYOf = (r: AxisRange) => (v: number) => box.bottom - (box.bottom - box.top) * (v - r.min) / (r.max - r.min)
+  const clipId = `${options.idPrefix ?? 'plot'}-area`
   const out: string[] = []
   out.push(`<svg xmlns="http://www.w3.org/2000/svg" width="${width}" height="${height}" viewBox="0 0 ${width} ${height}" font-family="${FONT}" font-size="11">`)
   out.push(`<title>${escapeXml(plot.title)}</title>`)
   out.push(`<rect width="${width}" height="${height}" fill="${options.background ?? 'white'}"/>`)
   out.push(`<text x="${box.left}" y="18" fill="${ink}" font-size="13" font-weight="600">${escapeXml(plot.title)}</text>`)
-  out.push(`<defs><clipPath id="plot-area"><rect x="${box.left}" y="${box.top}" width="${box.right - box.left}" height="${box.bottom - box.top}"/></clipPath></defs>`)
+  out.push(`<defs><clipPath id="${clipId}"><rect x="${box.left}" y="${box.top}" width="${box.right - box.left}" height="${box.bottom - box.top}"/></clipPath></defs>`)
 
   // Frequency axis.
   const xTicks = log ? logTicks(xMin, xMax) : linearTicks(xMin, xMax, 6).values
@@ -110,7 +113,7 @@ export function plotSvg(plot: ShownPlot, options: PlotSvgOptions = {}): string {
   out.push(`<rect x="${box.left}" y="${box.top}" width="${box.right - box.left}" height="${box.bottom - box.top}" fill="none" stroke="${ink}" stroke-width="1"/>`)
 
   // Traces, clipped to the plot area.
-  out.push('<g clip-path="url(#plot-area)" fill="none" stroke-width="1.75" stroke-linejoin="round">')
+  out.push(`<g clip-path="url(#${clipId})" fill="none" stroke-width="1.75" stroke-linejoin="round">`)
   for (const s of plot.series) {
     const range = s.scale === 'y2' ? y2Range : yRange
     const d = tracePath(plot.x, s.values, toX, range, toYOf(range))

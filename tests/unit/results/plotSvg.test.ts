@@ -37,6 +37,8 @@ describe('plot as SVG', () => {
     expect(svg.startsWith('<svg xmlns="http://www.w3.org/2000/svg" width="600" height="300"')).toBe(true)
     expect(svg).toContain('<title>Response: Magnitude &lt;dB&gt;</title>')
     expect(svg.match(/<path /g)).toHaveLength(2)
+    expect(svg).toContain('clip-path="url(#plot-area)"')
+    expect(plotSvg(plot(), { idPrefix: 'balance' })).toContain('<clipPath id="balance-area">')
     expect(svg).toContain('stroke-dasharray="6 4"')
     expect(svg).toContain('>−20 dB<')
     expect(svg).toContain('>2.00 GHz<')
