@@ -35,6 +35,13 @@ export function escapeXml(text: string): string {
 
 const r2 = (v: number) => Math.round(v * 100) / 100
 
+/** " (dB)", " (°, right axis)", " (right axis)" for a unitless trace on a two-axis plot. */
+function legendUnit(unit: string, scale?: 'y' | 'y2'): string {
+  const side = scale ? (scale === 'y2' ? 'right axis' : 'left axis') : ''
+  const parts = [unit, side].filter(Boolean)
+  return parts.length ? ` (${parts.join(', ')})` : ''
+}
+
 /** Finite extent of the series on one axis; a unit span around a single value. */
 function extent(plot: ShownPlot, scale: 'y' | 'y2'): AxisRange {
   let lo = Infinity, hi = -Infinity
@@ -69,7 +76,11 @@ export function plotSvg(plot: ShownPlot, options: PlotSvgOptions = {}): string {
   const ink = options.ink ?? INK
   const grid = options.grid ?? GRID
   const hasY2 = plot.y2Unit !== undefined && plot.series.some(s => s.scale === 'y2')
-  const legendRows = Math.ceil(plot.series.length / 4)
+  const legend = plot.series.map(s => s.label + legendUnit(s.unit, hasY2 ? s.scale : undefined))
+  // As many legend columns as the longest entry leaves room for (about 6 px a character at 11 px), at most four.
+  const longest = Math.max(1, ...legend.map(t => t.length))
+  const columns = Math.max(1, Math.min(4, Math.floor((width - 84) / (36 + longest * 6))))
+  const legendRows = Math.ceil(plot.series.length / columns)
   const box = { left: 64, right: width - (hasY2 ? 64 : 20), top: 30, bottom: height - 40 - legendRows * 16 }
   const f0 = plot.x[0] ?? 0
   const f1 = plot.x[plot.x.length - 1] ?? 1
@@ -122,15 +133,13 @@ export function plotSvg(plot: ShownPlot, options: PlotSvgOptions = {}): string {
   }
   out.push('</g>')
 
-  // Legend, four to a row, under the axis label.
-  const column = (box.right - box.left) / 4
+  // Legend under the axis label, in as many columns as fit.
+  const column = (box.right - box.left) / columns
   plot.series.forEach((s, n) => {
-    const x = box.left + (n % 4) * column
-    const y = box.bottom + 46 + Math.floor(n / 4) * 16
-    const side = hasY2 ? (s.scale === 'y2' ? ', right axis' : ', left axis') : ''
-    const unit = s.unit ? ` (${s.unit}${side})` : side ? ` (${side.slice(2)})` : ''
+    const x = box.left + (n % columns) * column
+    const y = box.bottom + 46 + Math.floor(n / columns) * 16
     out.push(`<line x1="${x}" y1="${y - 4}" x2="${x + 22}" y2="${y - 4}" stroke="${s.colour}" stroke-width="2"${s.dash ? ` stroke-dasharray="${s.dash.join(' ')}"` : ''}/>`)
-    out.push(`<text x="${x + 28}" y="${y}" fill="${ink}">${escapeXml(s.label + unit)}</text>`)
+    out.push(`<text x="${x + 28}" y="${y}" fill="${ink}">${escapeXml(legend[n]!)}</text>`)
   })
   out.push('</svg>')
   return `${out.join('\n')}\n`
