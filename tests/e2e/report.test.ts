@@ -59,6 +59,27 @@ describe('exports and the printable report of the demo branch-line network', () 
     reportUrl = page.url()
   })
 
+  it('a snapshot has a report of its own, reached from the snapshot bar, with the frozen summary', async () => {
+    const { page } = browser
+    const [, projectId, networkId] = /\/projects\/([^/]+)\/report\/([^/?]+)/.exec(reportUrl)!
+    const title = `Report check ${Date.now().toString(36)}`
+    const created = await page.evaluate(async ({ path, title }) => {
+      const response = await fetch(path, { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ title }) })
+      return response.json() as Promise<{ id: string }>
+    }, { path: `/api/projects/${projectId}/networks/${networkId}/snapshots`, title })
+    await page.goto(appUrl(`/projects/${projectId}/snapshots/${networkId}/${created.id}`))
+    await page.getByTestId('snapshot-heading').getByText(title).waitFor()
+    await page.getByTestId('open-report').click()
+    await page.waitForURL(new RegExp(`/report/${networkId}\\?snapshot=${created.id}$`))
+    await page.getByTestId('report-balance').locator('svg').waitFor({ timeout: 30_000 })
+    expect(await page.getByTestId('report-edition').textContent()).toMatch(new RegExp(`^Snapshot “${title}” of revision \\d+$`))
+    expect(await page.getByTestId('report-figures').textContent()).toContain('S21 −3.01 dB')
+    const file = join(outDir, 'report-snapshot-A4.pdf')
+    await page.pdf({ path: file, format: 'A4', printBackground: true })
+    expect(pdfText(file)).toContain(title)
+    execFileSync('pdftoppm', ['-png', '-r', '70', file, join(outDir, 'report-snapshot-A4')])
+  })
+
   for (const format of ['A4', 'Letter'] as const) {
     it(`prints the report to a ${format} PDF with the title, the plots and the caution`, async () => {
       const { page } = browser
