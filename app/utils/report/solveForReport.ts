@@ -1,5 +1,5 @@
 /** The report's solve: the document over its own sweep with the shared solver, as the editor's worker would. */
-import { solveDocument } from '~~/shared/solver'
+import { solveDocument, type PrepareOptions } from '~~/shared/solver'
 import type { Evaluated, NetworkDocument, Problem } from '~~/shared/network/types'
 import type { SolvedData } from '~~/app/workers/protocol'
 
@@ -10,10 +10,20 @@ export interface ReportSolve {
   evaluated: Evaluated | null
 }
 
-/** Solves a document for the report; never throws. */
-export function solveForReport(doc: NetworkDocument): ReportSolve {
+/** File names the document's data blocks read (to load before solving). */
+export function dataFileNames(doc: NetworkDocument): string[] {
+  const names = new Set<string>()
+  for (const block of doc.blocks ?? []) {
+    const file = (block.params as Record<string, unknown> | undefined)?.file
+    if (block.type === 'data' && typeof file === 'string') names.add(file)
+  }
+  return [...names]
+}
+
+/** Solves a document for the report (`options.resolveData` gives data blocks their files); never throws. */
+export function solveForReport(doc: NetworkDocument, options: PrepareOptions = {}): ReportSolve {
   try {
-    const solved = solveDocument(doc)
+    const solved = solveDocument(doc, options)
     if (!solved.ok) return { result: null, problems: solved.problems, evaluated: solved.evaluated ?? null }
     const r = solved.result
     return {

@@ -5,7 +5,7 @@ import type { NetworkDocument } from '../../../shared/network/types'
 import { reportBalancePair } from '../../../app/utils/report/balancePair'
 import { blockRows, specConditionLines, variableRows } from '../../../app/utils/report/reportTables'
 import { schematic } from '../../../app/utils/report/schematic'
-import { solveForReport } from '../../../app/utils/report/solveForReport'
+import { dataFileNames, solveForReport } from '../../../app/utils/report/solveForReport'
 
 const doc = branchLineHybrid as NetworkDocument
 
@@ -21,6 +21,22 @@ describe('the printable report', () => {
     // |S21| = |S31| = 1/√2 at the centre: 20·log10(1/√2) = −3.0103 dB (derived by hand).
     for (const t of summary.transfer!.filter(t => t.to === 2 || t.to === 3)) expect(Math.abs(t.db! + 3.0103)).toBeLessThan(0.05)
     expect(Math.abs(summary.balance!.imbalanceDb)).toBeLessThan(0.05)
+  })
+
+  it('names the files its data blocks read, once each, and reports a missing one as a problem', () => {
+    const d: NetworkDocument = {
+      format: 'portwright.network', version: 1, sweep: { start: 1e9, stop: 2e9, points: 3 },
+      blocks: [
+        { id: 'P1', type: 'port', params: { index: 1 } },
+        { id: 'D1', type: 'data', params: { file: 'amp.s2p' } }, { id: 'D2', type: 'data', params: { file: 'amp.s2p' } },
+      ],
+      wires: [['P1.1', 'D1.1'], ['D1.2', 'D2.1']],
+    }
+    expect(dataFileNames(d)).toEqual(['amp.s2p'])
+    const solved = solveForReport(d, { resolveData: () => undefined })
+    expect(solved.result).toBeNull()
+    expect(solved.problems.map(p => p.block)).toEqual(['D1', 'D2'])
+    expect(solved.problems[0]!.message).toMatch(/"amp\.s2p" was not found/)
   })
 
   it('places every block and wire of the canvas inside one box', () => {
