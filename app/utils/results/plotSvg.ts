@@ -19,6 +19,8 @@ export interface PlotSvgOptions {
   ink?: string
   grid?: string
   background?: string
+  /** A line of small print under the legend (the simulated-results caution of an exported picture). */
+  footnote?: string
   /** Prefix of the picture's element ids, unique per page when several plots share one. @default 'plot' */
   idPrefix?: string
 }
@@ -81,7 +83,8 @@ export function plotSvg(plot: ShownPlot, options: PlotSvgOptions = {}): string {
   const longest = Math.max(1, ...legend.map(t => t.length))
   const columns = Math.max(1, Math.min(4, Math.floor((width - 84) / (36 + longest * 6))))
   const legendRows = Math.ceil(plot.series.length / columns)
-  const box = { left: 64, right: width - (hasY2 ? 64 : 20), top: 30, bottom: height - 40 - legendRows * 16 }
+  const footRoom = options.footnote ? 18 : 0
+  const box = { left: 64, right: width - (hasY2 ? 64 : 20), top: 30, bottom: height - 40 - legendRows * 16 - footRoom }
   const f0 = plot.x[0] ?? 0
   const f1 = plot.x[plot.x.length - 1] ?? 1
   const [xMin, xMax] = f1 > f0 ? [f0, f1] : [f0 * 0.9 || -1, f0 * 1.1 || 1]
@@ -141,6 +144,7 @@ export function plotSvg(plot: ShownPlot, options: PlotSvgOptions = {}): string {
     out.push(`<line x1="${x}" y1="${y - 4}" x2="${x + 22}" y2="${y - 4}" stroke="${s.colour}" stroke-width="2"${s.dash ? ` stroke-dasharray="${s.dash.join(' ')}"` : ''}/>`)
     out.push(`<text x="${x + 28}" y="${y}" fill="${ink}">${escapeXml(legend[n]!)}</text>`)
   })
+  if (options.footnote) out.push(`<text x="${box.left}" y="${height - 8}" fill="${ink}" font-size="9">${escapeXml(options.footnote)}</text>`)
   out.push('</svg>')
   return `${out.join('\n')}\n`
 }

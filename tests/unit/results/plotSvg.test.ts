@@ -61,6 +61,11 @@ describe('plot as SVG', () => {
     expect(svg).toContain('(°, right axis)')
   })
 
+  it('writes a footnote (the caution of an exported picture) only when asked', () => {
+    expect(plotSvg(plot(), { footnote: 'Simulated & checked' })).toContain('font-size="9">Simulated &amp; checked</text>')
+    expect(plotSvg(plot())).not.toContain('font-size="9"')
+  })
+
   it('escapes markup in labels', () => {
     expect(escapeXml('a<b & "c">')).toBe('a&lt;b &amp; &quot;c&quot;&gt;')
   })
