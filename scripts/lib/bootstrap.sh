@@ -41,4 +41,9 @@ ensure_chromium() {
     echo "Installing Chromium from Debian's packages (browser tests)…"
     apt_install chromium
   fi
+  # The report test turns printed PDFs into page images and reads their text.
+  if ! command -v pdftoppm >/dev/null 2>&1; then
+    echo "Installing poppler-utils from Debian's packages (PDF pages of the report test)…"
+    apt_install poppler-utils
+  fi
 }

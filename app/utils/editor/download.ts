@@ -12,3 +12,16 @@ export function downloadText(filename: string, text: string, type = 'application
 export function fileStem(name: string | undefined): string {
   return (name ?? 'network').toLowerCase().replace(/[^a-z0-9]+/g, '-').replace(/^-|-$/g, '') || 'network'
 }
+
+/** Offer a canvas (a drawn plot) as a PNG download. */
+export function downloadCanvasPng(filename: string, canvas: HTMLCanvasElement): void {
+  canvas.toBlob((blob) => {
+    if (!blob) return
+    const url = URL.createObjectURL(blob)
+    const a = document.createElement('a')
+    a.href = url
+    a.download = filename
+    a.click()
+    setTimeout(() => URL.revokeObjectURL(url), 1000)
+  }, 'image/png')
+}
