@@ -1,5 +1,6 @@
 import { formatQuantity } from '../network/format-quantity'
 import type { Problem } from '../network/types'
+import { codeGenerationAllowed, generatedLoop, generatedMerge, MAX_GENERATED_PORTS, type GeneratedJoin } from './generated-kernels'
 import { closeLoop, kernelScratch, mergeNetworks } from './join-kernels'
 import type { JoinOrder } from './join-order'
 import { planJoinOrder, type JoinPlanCache } from './plan-cache'
@@ -56,6 +57,8 @@ interface Step {
   l: number
   out: number
   connection: number
+  /** The same join as generated code, where the runtime allows it. */
+  generated?: GeneratedJoin
 }
 /** Frequencies solved together: long enough to amortise loop overhead, short enough to stay in cache. */
 export const CHUNK = 32
@@ -113,6 +116,14 @@ export class CompiledNetwork implements NestedNetwork {
     )
     this.planReused = plan.reused
     this.steps = recordSteps(space, this.connections, plan.order)
+    if (codeGenerationAllowed()) {
+      for (const step of this.steps) {
+        if (step.m + step.n - 2 > MAX_GENERATED_PORTS) continue
+        step.generated = step.kind === LOOP
+          ? generatedLoop(step.m, step.k, step.l, reciprocal, CHUNK)
+          : generatedMerge(step.m, step.k, step.n, step.l, reciprocal, CHUNK)
+      }
+    }
     this.stepCount = this.steps.length
 
     // Where each external port ends up: buffer and position of its final item.
@@ -163,8 +174,10 @@ export class CompiledNetwork implements NestedNetwork {
     const { bufRe, bufIm, reciprocal, scratch } = this
     if (!this.fillBlocks(frequencies, start, count)) return false
     for (const step of this.steps) {
-      const { a, b, out } = step
-      const failed = step.kind === LOOP
+      const { a, b, out, generated } = step
+      const failed = generated
+        ? generated(bufRe[a]!, bufIm[a]!, bufRe[b]!, bufIm[b]!, bufRe[out]!, bufIm[out]!, count)
+        : step.kind === LOOP
         ? closeLoop(bufRe[a]!, bufIm[a]!, step.m, step.k, step.l, bufRe[out]!, bufIm[out]!, reciprocal, count, CHUNK, scratch)
         : mergeNetworks(bufRe[a]!, bufIm[a]!, step.m, step.k, bufRe[b]!, bufIm[b]!, step.n, step.l, bufRe[out]!, bufIm[out]!, reciprocal, count, CHUNK, scratch)
       if (failed >= 0) {
