@@ -1,6 +1,6 @@
 import { formatQuantity } from '../network/format-quantity'
 import type { Problem } from '../network/types'
-import { codeGenerationAllowed, generatedLoop, generatedMerge, MAX_GENERATED_PORTS, type GeneratedJoin } from './generated-kernels'
+import { codeGenerationAllowed, generatedLoop, generatedMerge, generationDue, MAX_GENERATED_PORTS, type GeneratedJoin } from './generated-kernels'
 import { closeLoop, kernelScratch, mergeNetworks } from './join-kernels'
 import type { JoinOrder } from './join-order'
 import { planJoinOrder, type JoinPlanCache } from './plan-cache'
@@ -90,6 +90,8 @@ export class CompiledNetwork implements NestedNetwork {
   private readonly scratch = kernelScratch(CHUNK)
   private readonly single = new Float64Array(1)
   private lastFailure: Problem | undefined
+  /** Generated kernels may replace the generic ones once the process has done enough generic work. */
+  private generationPending: boolean
   private lastFailureSingular = false
 
   constructor(blocks: CompileBlock[], wires: ReadonlyArray<readonly [string, string]>, options: CompileOptions = {}) {
@@ -117,14 +119,7 @@ export class CompiledNetwork implements NestedNetwork {
     )
     this.planReused = plan.reused
     this.steps = recordSteps(space, this.connections, plan.order)
-    if (codeGenerationAllowed()) {
-      for (const step of this.steps) {
-        if (step.m + step.n - 2 > MAX_GENERATED_PORTS) continue
-        step.generated = step.kind === LOOP
-          ? generatedLoop(step.m, step.k, step.l, reciprocal, CHUNK)
-          : generatedMerge(step.m, step.k, step.n, step.l, reciprocal, CHUNK)
-      }
-    }
+    this.generationPending = codeGenerationAllowed()
     this.stepCount = this.steps.length
 
     // Where each external port ends up: buffer and position of its final item.
@@ -184,6 +179,7 @@ export class CompiledNetwork implements NestedNetwork {
 
   private solveRun(frequencies: Float64Array, start: number, count: number, re: Float64Array, im: Float64Array, offset: number): boolean {
     const { bufRe, bufIm, reciprocal, scratch } = this
+    if (this.generationPending && generationDue(count * this.steps.length)) this.useGeneratedKernels()
     if (!this.fillBlocks(frequencies, start, count)) return false
     for (const step of this.steps) {
       const { a, b, out, generated } = step
@@ -199,6 +195,17 @@ export class CompiledNetwork implements NestedNetwork {
       }
     }
     return this.gather(frequencies, start, count, re, im, offset)
+  }
+
+  /** Gives each step its generated kernel (same arithmetic, so S does not change). */
+  private useGeneratedKernels(): void {
+    this.generationPending = false
+    for (const step of this.steps) {
+      if (step.m + step.n - 2 > MAX_GENERATED_PORTS) continue
+      step.generated = step.kind === LOOP
+        ? generatedLoop(step.m, step.k, step.l, this.reciprocal, CHUNK)
+        : generatedMerge(step.m, step.k, step.n, step.l, this.reciprocal, CHUNK)
+    }
   }
 
   /** Writes every frequency-dependent block's S into its buffer slots for this run. */

@@ -21,17 +21,34 @@ const CACHE_LIMIT = 4096
  * square of the size past what the JavaScript engine optimises, and the generic loops win.
  */
 export const MAX_GENERATED_PORTS = 24
-let switchedOff = false
+/** Which kernels new solves use: generated ones once warm (the default), always, or never. */
+export type KernelChoice = 'auto' | 'generated' | 'generic'
+let choice: KernelChoice = 'auto'
+let workDone = 0
+/**
+ * Joins × frequencies solved with the generic kernels before code is generated, process-wide.
+ * Compiling the generated functions costs about as much CPU as this much generic work (some
+ * 200 ms for the beamforming matrix), so a one-off solve never pays for compilation and a process
+ * that keeps solving (server, benchmarks, repeated edits) soon runs the faster code.
+ */
+export const GENERATE_AFTER_WORK = 1_000_000
 
 /** Whether this runtime may generate code: Node (tsx, scripts, server), not a browser page or worker. */
 export function codeGenerationAllowed(): boolean {
   const runtime = globalThis as { process?: { versions?: { node?: string } }; window?: unknown; importScripts?: unknown }
-  return !switchedOff && typeof runtime.process?.versions?.node === 'string' && runtime.window === undefined && runtime.importScripts === undefined
+  return choice !== 'generic' && typeof runtime.process?.versions?.node === 'string' && runtime.window === undefined && runtime.importScripts === undefined
 }
 
-/** For tests and benchmarks: solve with the generic kernels only (true) or use generated ones where allowed (false). */
-export function useGenericKernelsOnly(value: boolean): void {
-  switchedOff = value
+/** Counts generic join work (joins × frequencies); true once generated kernels should be used. */
+export function generationDue(work: number): boolean {
+  if (choice === 'generated') return true
+  workDone += work
+  return workDone >= GENERATE_AFTER_WORK
+}
+
+/** For tests and benchmarks: which kernels solves use from now on. */
+export function chooseKernels(value: KernelChoice): void {
+  choice = value
 }
 
 const at = (i: number, j: number, n: number, symmetric: boolean): number => (symmetric && i > j ? j * n + i : i * n + j)

@@ -4,14 +4,14 @@
 // in the other solver tests; this file only pins the numbers.
 import { readFileSync } from 'node:fs'
 import { afterAll, describe, expect, it } from 'vitest'
-import { useGenericKernelsOnly } from '../../../shared/solver/generated-kernels'
+import { chooseKernels } from '../../../shared/solver/generated-kernels'
 import { GOLDEN_NETWORKS } from './golden/networks'
 import { solveGolden, type GoldenResult } from './golden/solve-golden'
 
 const TOLERANCE = 1e-12
 const golden = JSON.parse(readFileSync(new URL('./golden/solver-golden.json', import.meta.url), 'utf8')) as Record<string, GoldenResult>
 
-afterAll(() => useGenericKernelsOnly(false))
+afterAll(() => chooseKernels('auto'))
 
 describe('solver results stay as pinned', () => {
   it('pins every golden network and nothing else', () => {
@@ -19,9 +19,9 @@ describe('solver results stay as pinned', () => {
   })
 
   // Node solves with kernels generated per join; a browser worker, where code generation is forbidden, with the generic ones.
-  for (const [kernels, genericOnly] of [['generated', false], ['generic', true]] as const) for (const [name, network] of Object.entries(GOLDEN_NETWORKS)) {
+  for (const kernels of ['generated', 'generic'] as const) for (const [name, network] of Object.entries(GOLDEN_NETWORKS)) {
     it(`${name}, ${kernels} kernels: every S entry within 1e-12 of the pinned value`, () => {
-      useGenericKernelsOnly(genericOnly)
+      chooseKernels(kernels)
       const pinned = golden[name]!
       const now = solveGolden(network)
       expect(now.ports).toBe(pinned.ports)
