@@ -1,5 +1,6 @@
 import { formatQuantity } from '../network/format-quantity'
 import type { Problem } from '../network/types'
+import { codeGenerationAllowed, generatedLoop, generatedMerge, generationDue, MAX_GENERATED_PORTS, type GeneratedJoin } from './generated-kernels'
 import { closeLoop, kernelScratch, mergeNetworks } from './join-kernels'
 import type { JoinOrder } from './join-order'
 import { planJoinOrder, type JoinPlanCache } from './plan-cache'
@@ -56,6 +57,8 @@ interface Step {
   l: number
   out: number
   connection: number
+  /** The same join as generated code, where the runtime allows it. */
+  generated?: GeneratedJoin
 }
 /** Frequencies solved together: long enough to amortise loop overhead, short enough to stay in cache. */
 export const CHUNK = 32
@@ -83,9 +86,12 @@ export class CompiledNetwork implements NestedNetwork {
   private readonly gatherBuffer: Int32Array
   private readonly gatherPosition: Int32Array
   private readonly gatherSize: Int32Array
+  private readonly gatherFrom: Int32Array
   private readonly scratch = kernelScratch(CHUNK)
   private readonly single = new Float64Array(1)
   private lastFailure: Problem | undefined
+  /** Generated kernels may replace the generic ones once the process has done enough generic work. */
+  private generationPending: boolean
   private lastFailureSingular = false
 
   constructor(blocks: CompileBlock[], wires: ReadonlyArray<readonly [string, string]>, options: CompileOptions = {}) {
@@ -113,6 +119,7 @@ export class CompiledNetwork implements NestedNetwork {
     )
     this.planReused = plan.reused
     this.steps = recordSteps(space, this.connections, plan.order)
+    this.generationPending = codeGenerationAllowed()
     this.stepCount = this.steps.length
 
     // Where each external port ends up: buffer and position of its final item.
@@ -125,6 +132,17 @@ export class CompiledNetwork implements NestedNetwork {
       this.gatherPosition[p] = item.sockets.indexOf(socket)
       this.gatherSize[p] = item.sockets.length
     })
+    // Entry (i, j) of the result: where it sits in its buffer, or −1 when i and j end in different items (S = 0).
+    this.gatherFrom = new Int32Array(this.ports * this.ports)
+    for (let i = 0; i < this.ports; i++) {
+      for (let j = 0; j < this.ports; j++) {
+        const pi = this.gatherPosition[i]!, pj = this.gatherPosition[j]!, size = this.gatherSize[i]!
+        // Reciprocal joins keep only the upper triangle.
+        this.gatherFrom[i * this.ports + j] = this.gatherBuffer[i]! >= 0 && this.gatherBuffer[j] === this.gatherBuffer[i]
+          ? (reciprocal && pi > pj ? pj * size + pi : pi * size + pj) * CHUNK
+          : -1
+      }
+    }
   }
 
   /** Why the last solve failed. */
@@ -161,10 +179,13 @@ export class CompiledNetwork implements NestedNetwork {
 
   private solveRun(frequencies: Float64Array, start: number, count: number, re: Float64Array, im: Float64Array, offset: number): boolean {
     const { bufRe, bufIm, reciprocal, scratch } = this
+    if (this.generationPending && generationDue(count * this.steps.length)) this.useGeneratedKernels()
     if (!this.fillBlocks(frequencies, start, count)) return false
     for (const step of this.steps) {
-      const { a, b, out } = step
-      const failed = step.kind === LOOP
+      const { a, b, out, generated } = step
+      const failed = generated
+        ? generated(bufRe[a]!, bufIm[a]!, bufRe[b]!, bufIm[b]!, bufRe[out]!, bufIm[out]!, count)
+        : step.kind === LOOP
         ? closeLoop(bufRe[a]!, bufIm[a]!, step.m, step.k, step.l, bufRe[out]!, bufIm[out]!, reciprocal, count, CHUNK, scratch)
         : mergeNetworks(bufRe[a]!, bufIm[a]!, step.m, step.k, bufRe[b]!, bufIm[b]!, step.n, step.l, bufRe[out]!, bufIm[out]!, reciprocal, count, CHUNK, scratch)
       if (failed >= 0) {
@@ -174,6 +195,17 @@ export class CompiledNetwork implements NestedNetwork {
       }
     }
     return this.gather(frequencies, start, count, re, im, offset)
+  }
+
+  /** Gives each step its generated kernel (same arithmetic, so S does not change). */
+  private useGeneratedKernels(): void {
+    this.generationPending = false
+    for (const step of this.steps) {
+      if (step.m + step.n - 2 > MAX_GENERATED_PORTS) continue
+      step.generated = step.kind === LOOP
+        ? generatedLoop(step.m, step.k, step.l, this.reciprocal, CHUNK)
+        : generatedMerge(step.m, step.k, step.n, step.l, this.reciprocal, CHUNK)
+    }
   }
 
   /** Writes every frequency-dependent block's S into its buffer slots for this run. */
@@ -203,30 +235,36 @@ export class CompiledNetwork implements NestedNetwork {
 
   /** Copies the final items' entries into port order; refuses to hand on a non-finite number. */
   private gather(frequencies: Float64Array, start: number, count: number, re: Float64Array, im: Float64Array, offset: number): boolean {
-    const { bufRe, bufIm, reciprocal } = this
-    const n = this.ports
-    for (let i = 0; i < n; i++) {
-      const bi = this.gatherBuffer[i]!, pi = this.gatherPosition[i]!, size = this.gatherSize[i]!
-      for (let j = 0; j < n; j++) {
-        const same = this.gatherBuffer[j] === bi
-        const pj = this.gatherPosition[j]!
-        // Reciprocal joins keep only the upper triangle.
-        const from = (reciprocal && pi > pj ? pj * size + pi : pi * size + pj) * CHUNK
-        const sourceRe = bufRe[bi]!, sourceIm = bufIm[bi]!
-        for (let q = 0; q < count; q++) {
-          const at = offset + (q * n + i) * n + j
-          const vR = same ? sourceRe[from + q]! : 0
-          const vI = same ? sourceIm[from + q]! : 0
-          // NaN fails every comparison; a block model pushed past its range must not leak it.
-          if (!(Math.abs(vR) < Infinity && Math.abs(vI) < Infinity)) {
-            const frequency = frequencies[start + q]!
-            this.lastFailureSingular = true
-            this.lastFailure = { frequency, message: `the result is not a finite number at ${formatQuantity(frequency, 'frequency')} (S${i + 1}${j + 1})` }
-            return false
-          }
-          re[at] = vR
-          im[at] = vI
-        }
+    const { bufRe, bufIm, gatherFrom } = this
+    const n = this.ports, nn = n * n
+    // x·0 is 0 for every finite x and NaN otherwise, so one sum tells whether anything was not finite.
+    let check = 0
+    for (let e = 0; e < nn; e++) {
+      const from = gatherFrom[e]!
+      let at = offset + e
+      if (from < 0) {
+        for (let q = 0; q < count; q++, at += nn) { re[at] = 0; im[at] = 0 }
+        continue
+      }
+      const buffer = this.gatherBuffer[Math.floor(e / n)]!
+      const sourceRe = bufRe[buffer]!, sourceIm = bufIm[buffer]!
+      for (let q = 0; q < count; q++, at += nn) {
+        const vR = sourceRe[from + q]!, vI = sourceIm[from + q]!
+        check += vR * 0 + vI * 0
+        re[at] = vR
+        im[at] = vI
+      }
+    }
+    if (check === 0) return true
+    // Something was not finite: name the first frequency and entry.
+    for (let e = 0; e < nn; e++) {
+      for (let q = 0; q < count; q++) {
+        const at = offset + q * nn + e
+        if (Math.abs(re[at]!) < Infinity && Math.abs(im[at]!) < Infinity) continue
+        const frequency = frequencies[start + q]!
+        this.lastFailureSingular = true
+        this.lastFailure = { frequency, message: `the result is not a finite number at ${formatQuantity(frequency, 'frequency')} (S${Math.floor(e / n) + 1}${(e % n) + 1})` }
+        return false
       }
     }
     return true
