@@ -6,6 +6,7 @@ import type { BlockSpec, NetworkDocument } from '~~/shared/network/types'
 import { GRID, kindSpec, type Side } from './blockCatalog'
 import { layoutOf, parseTerminal, wireCount, wireKey, type Wire } from './documentOps'
 import { orientedSize, placeTerminal, type Rotation } from './geometry'
+import { storedRoute } from './wireRoutes'
 
 /** A terminal as the canvas draws it, in pixels within the node box. */
 export interface PlacedTerminal {
@@ -57,7 +58,8 @@ export interface FlowEdge {
   targetHandle: string
   type: string
   selected: boolean
-  data: { wire: Wire }
+  /** `route`: the stored orthogonal route (from tidy), drawn while it still meets both terminals. */
+  data: { wire: Wire, route?: Array<[number, number]> }
 }
 
 /** Terminals of a block whose kind the editor cannot draw: as many as its wires mention, down its left side. */
@@ -127,7 +129,7 @@ export function documentEdges(doc: NetworkDocument, selected: ReadonlySet<string
     const id = wireKey(w)
     edges.push({
       id, source: a.block, sourceHandle: String(a.n), target: b.block, targetHandle: String(b.n),
-      type: 'wire', selected: selected.has(id), data: { wire: w },
+      type: 'wire', selected: selected.has(id), data: { wire: w, route: storedRoute(doc, id) },
     })
   }
   return edges
