@@ -27,10 +27,12 @@ async function api<T>(on: Page, path: string, init?: { method: string, body: unk
 }
 
 const line = (impedance: number) => ({
-  version: '1.1',
+  format: 'portwright.network',
+  version: 1,
   name: 'Offline check',
+  referenceImpedance: 50,
   variables: { f0: '2 GHz' },
-  sweep: { start: '1 GHz', stop: '3 GHz', points: 11 },
+  sweep: { start: '1 GHz', stop: '3 GHz', points: 11, spacing: 'linear' },
   blocks: [
     { id: 'P1', type: 'port', params: { index: 1 }, layout: { x: 0, y: 0 } },
     { id: 'LN1', type: 'line', params: { impedance, degrees: 90, at: 'f0' }, layout: { x: 160, y: 0 } },
