@@ -43,14 +43,22 @@ describe('tidy on the canvas', () => {
   })
   afterAll(async () => { await close?.() })
 
-  it('lays the branch-line hybrid out without crossings, as one undoable change', async () => {
-    const template = EXAMPLES['branch-line-hybrid']!
+  it.each([
+    ['as the template draws it', (d: any) => d],
+    // Ports 2 and 4 swapped on the canvas: the same circuit drawn with its wires across each other.
+    ['scrambled', (d: any) => {
+      const at = (id: string) => d.blocks.find((b: { id: string }) => b.id === id)
+      ;[at('P2').layout, at('P4').layout] = [at('P4').layout, at('P2').layout]
+      return d
+    }],
+  ])('lays the branch-line hybrid (%s) out without crossings, as one undoable change', async (_, arrange) => {
+    const template = arrange(JSON.parse(JSON.stringify(EXAMPLES['branch-line-hybrid']!)))
     const created = await api<{ id: string }>(`/api/projects/${projectId}/networks`, { method: 'POST', body: { name: `Tidy check ${Date.now()}`, document: template } })
     await page.goto(appUrl(`/projects/${projectId}/networks/${created.id}`))
     await expect.poll(() => page.getAttribute('[data-testid="live-status"]', 'data-status'), { timeout: 15_000 }).toBe('live')
     await expect.poll(async () => (await drawnWires()).length).toBe(template.wires.length)
     const before = countCrossings(await drawnWires())
-    await screenshot(page, 'tidy-before')
+    await screenshot(page, `tidy-${_ === 'scrambled' ? 'scrambled-' : ''}before`)
 
     await page.click('[data-testid="canvas"] .vue-flow__pane')
     await page.keyboard.press('l')
@@ -61,11 +69,11 @@ describe('tidy on the canvas', () => {
     }, { timeout: 20_000 }).toBe(template.wires.length)
     await expect.poll(() => page.$$eval('[data-testid^="wire-"][data-routed="true"]', els => els.length), { timeout: 15_000 }).toBe(template.wires.length)
     const after = countCrossings(await drawnWires())
-    process.stdout.write(`wire crossings on the branch-line hybrid: ${before} before tidy, ${after} after\n`)
+    process.stdout.write(`wire crossings on the branch-line hybrid (${_}): ${before} before tidy, ${after} after\n`)
     expect(after).toBeLessThanOrEqual(before)
     expect(after).toBe(0)
     await page.waitForTimeout(300)
-    await screenshot(page, 'tidy-after')
+    await screenshot(page, `tidy-${_ === 'scrambled' ? 'scrambled-' : ''}after`)
 
     // One undo takes the whole tidy back: the template's own layout and no routes.
     await page.keyboard.press('Control+z')
