@@ -9,6 +9,8 @@ import type { Page } from 'playwright-core'
 import { appUrl } from '../support/app'
 import { launchBrowser, screenshot, signIn } from '../support/browser'
 import { countCrossings, polylineOfPath } from '~~/app/utils/editor/wireCrossings'
+import { routeJunctions } from '~~/app/utils/editor/wireRoutes'
+import { wireKey } from '~~/app/utils/editor/documentOps'
 import { EXAMPLES } from '~~/shared/examples/index'
 
 let page: Page
@@ -72,6 +74,10 @@ describe('tidy on the canvas', () => {
     process.stdout.write(`wire crossings on the branch-line hybrid (${_}): ${before} before tidy, ${after} after\n`)
     expect(after).toBeLessThanOrEqual(before)
     expect(after).toBe(0)
+    // A dot wherever routed wires of one terminal part ways, as many as the stored routes give.
+    const kept = await api<{ document: { wires: Array<[string, string]>, view: { routes: Record<string, Array<[number, number]>> } } }>(`/api/projects/${projectId}/networks/${created.id}`)
+    const junctions = routeJunctions(kept.document.wires, kept.document.view.routes, wireKey)
+    expect(await page.$$eval('[data-testid="route-junction"]', els => els.length)).toBe(junctions.length)
     await page.waitForTimeout(300)
     await screenshot(page, `tidy-${_ === 'scrambled' ? 'scrambled-' : ''}after`)
 

@@ -6,7 +6,7 @@ import type { BlockSpec, NetworkDocument } from '~~/shared/network/types'
 import { GRID, kindSpec, type Side } from './blockCatalog'
 import { layoutOf, parseTerminal, wireCount, wireKey, type Wire } from './documentOps'
 import { orientedSize, placeTerminal, type Rotation } from './geometry'
-import { storedRoute } from './wireRoutes'
+import { routeJunctions, storedRoute } from './wireRoutes'
 
 /** A terminal as the canvas draws it, in pixels within the node box. */
 export interface PlacedTerminal {
@@ -59,7 +59,8 @@ export interface FlowEdge {
   type: string
   selected: boolean
   /** `route`: the stored orthogonal route (from tidy), drawn while it still meets both terminals. */
-  data: { wire: Wire, route?: Array<[number, number]> }
+  /** `dots`: where this wire parts from another of the same terminal along stored routes (junction dots). */
+  data: { wire: Wire, route?: Array<[number, number]>, dots?: Array<[number, number]> }
 }
 
 /** Terminals of a block whose kind the editor cannot draw: as many as its wires mention, down its left side. */
@@ -131,6 +132,14 @@ export function documentEdges(doc: NetworkDocument, selected: ReadonlySet<string
       id, source: a.block, sourceHandle: String(a.n), target: b.block, targetHandle: String(b.n),
       type: 'wire', selected: selected.has(id), data: { wire: w, route: storedRoute(doc, id) },
     })
+  }
+  const routes: Record<string, Array<[number, number]>> = {}
+  for (const e of edges) if (e.data.route) routes[e.id] = e.data.route
+  if (Object.keys(routes).length) {
+    for (const j of routeJunctions(edges.map(e => e.data.wire), routes, wireKey)) {
+      const edge = edges.find(e => e.id === j.wire)
+      if (edge) (edge.data.dots ??= []).push(j.at)
+    }
   }
   return edges
 }
