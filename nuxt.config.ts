@@ -1,4 +1,5 @@
 // Nuxt configuration: one app, one process (pages, API and websocket on one port).
+import { existsSync, statSync } from 'node:fs'
 import { join } from 'node:path'
 
 // PORTWRIGHT_BUILD_NAME gives a build its own folders, so that two builds in one checkout
@@ -41,6 +42,16 @@ export default defineNuxtConfig({
             target: 'node20',
             minify: true,
             logLevel: 'warning',
+            // The server's own aliases (`#shared/…`, `~~/…`), resolved as Nitro resolves them.
+            plugins: [{
+              name: 'portwright-aliases',
+              setup(b) {
+                b.onResolve({ filter: /^(#shared|~~)\// }, ({ path }) => {
+                  const base = join(nitro.options.rootDir, path.startsWith('#shared/') ? `shared/${path.slice(8)}` : path.slice(3))
+                  return { path: [`${base}.ts`, base, join(base, 'index.ts')].find(f => existsSync(f) && statSync(f).isFile()) ?? `${base}.ts` }
+                })
+              },
+            }],
           })
         }
       },

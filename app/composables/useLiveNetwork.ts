@@ -8,12 +8,15 @@
  * stamps who each person is.
  *
  * Edits made while the connection is down stay in the Yjs document and are
- * sent when it is back (y-websocket's sync exchange). They live in this tab
- * only: a reload while offline loses them.
+ * sent when it is back (y-websocket's sync exchange). For people who may edit,
+ * the document is also kept in the browser's IndexedDB (y-indexeddb), so edits
+ * made offline survive closing the tab: the next visit opens the kept copy when
+ * the live server cannot be reached, and the two merge once it can.
  */
 import { onBeforeUnmount, ref, shallowRef, watch, type InjectionKey, type Ref } from 'vue'
 import * as Y from 'yjs'
 import { WebsocketProvider } from 'y-websocket'
+import { IndexeddbPersistence } from 'y-indexeddb'
 import type { NetworkDocument } from '~~/shared/network/types'
 import type { NetworkDto } from '~~/shared/types/api'
 import { createNetworkReader, hasNetwork, NETWORK_ROOT, readNetwork, writeNetwork, writeNetworkChanges } from '~~/shared/live/network-ydoc'
@@ -96,6 +99,11 @@ export function createLiveSource(doc: Y.Doc, options: LiveSourceOptions = {}): D
   }
 }
 
+/** The IndexedDB database that keeps a network's live document in this browser. */
+export function keptDocumentName(networkId: string): string {
+  return `portwright:network:${networkId}`
+}
+
 export interface LiveNetworkOptions {
   /** How long to wait for the first sync before editing without live co-editing. @default 8000 */
   connectTimeoutMs?: number
@@ -121,9 +129,24 @@ export function useLiveNetwork(network: NetworkDto, options: LiveNetworkOptions 
   // BroadcastChannel between tabs is off: every change goes through the server, which enforces roles.
   const provider = new WebsocketProvider(wsBase, network.id, doc, { disableBc: true, maxBackoffTime: 4000 })
   store.readOnly = true
+  // The browser's own copy, for people who may edit: edits made offline outlive the tab.
+  const kept = mayWrite ? new IndexeddbPersistence(keptDocumentName(network.id), doc) : null
+  let keptReady = false
+  kept?.whenSynced.then(() => {
+    keptReady = true
+    if (provider.wsUnsuccessfulReconnects > 0) attachKept()
+  }).catch(() => {})
+
+  /** Opens the kept copy when the server cannot be reached; returns whether it did. */
+  function attachKept(): boolean {
+    if (active.value || !keptReady || !hasNetwork(doc)) return false
+    attach()
+    refreshStatus()
+    return true
+  }
 
   const timeout = setTimeout(() => {
-    if (active.value) return
+    if (active.value || attachKept()) return
     status.value = 'unavailable'
     message.value = 'Live co-editing is not reachable; changes are saved without it.'
     provider.destroy()
@@ -149,6 +172,8 @@ export function useLiveNetwork(network: NetworkDto, options: LiveNetworkOptions 
     refreshStatus()
   })
   provider.on('status', refreshStatus)
+  // A failed connection before the first sync: the kept copy, if any, opens at once.
+  provider.on('connection-error', () => { attachKept() })
   provider.on('connection-close', async (event) => {
     const code = event?.code ?? 0
     if (code === 4401 || code === 4403) {
@@ -170,6 +195,7 @@ export function useLiveNetwork(network: NetworkDto, options: LiveNetworkOptions 
       message.value = 'The server refused a change from this editor; reload to continue.'
       store.readOnly = true
     }
+    if (code !== 4401 && code !== 4403 && code !== 4400 && code !== 4413) attachKept()
     refreshStatus()
   })
 
@@ -184,6 +210,8 @@ export function useLiveNetwork(network: NetworkDto, options: LiveNetworkOptions 
     clearTimeout(timeout)
     provider.destroy()
     source?.destroy()
+    // Closing waits for pending IndexedDB writes; destroying the doc afterwards is harmless.
+    void kept?.destroy()
     doc.destroy()
   }
   onBeforeUnmount(dispose)

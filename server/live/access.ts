@@ -5,8 +5,8 @@
  * Anything else is refused with a plain HTTP answer and no websocket.
  */
 import { networkMembership } from './store'
-import { trustProxy } from '../utils/trust-proxy'
-import { liveSessionFor, sessionSecretOf } from '../utils/account-sessions'
+import { trustProxy } from '~~/server/utils/trust-proxy'
+import { liveSessionFor, sessionSecretOf } from '~~/server/utils/account-sessions'
 
 const PATH = /^\/live\/networks\/([0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12})\/?$/i
 

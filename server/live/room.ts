@@ -11,8 +11,8 @@ import * as syncProtocol from 'y-protocols/sync'
 import * as awarenessProtocol from 'y-protocols/awareness'
 import * as encoding from 'lib0/encoding'
 import * as decoding from 'lib0/decoding'
-import { NETWORK_ROOT } from '../../shared/live/network-ydoc'
-import { checkUpdateOn } from '../../shared/live/strict-read'
+import { NETWORK_ROOT } from '#shared/live/network-ydoc'
+import { checkUpdateOn } from '#shared/live/strict-read'
 import { appendUpdate, loadLiveState, mergeLiveState, publishPresence, readUpdate } from './store'
 
 const MESSAGE_SYNC = 0

@@ -6,11 +6,11 @@
  */
 import { QueryTypes, type Transaction } from 'sequelize'
 import * as Y from 'yjs'
-import { networkToYDoc, writeNetwork } from '../../shared/live/network-ydoc'
-import { readNetworkStrict } from '../../shared/live/strict-read'
-import type { NetworkDocument } from '../../shared/network/types'
-import { useDatabase } from '../utils/database'
-import { checkpointAfterMerge, withoutRisk } from '../utils/checkpoints'
+import { networkToYDoc, writeNetwork } from '#shared/live/network-ydoc'
+import { readNetworkStrict } from '#shared/live/strict-read'
+import type { NetworkDocument } from '#shared/network/types'
+import { useDatabase } from '~~/server/utils/database'
+import { checkpointAfterMerge, withoutRisk } from '~~/server/utils/checkpoints'
 
 /** Channel of "an update was stored": payload `<networkId> <updateId> <instanceId>`. */
 export const UPDATE_CHANNEL = 'portwright_live_update'

@@ -3,9 +3,9 @@
  * each gives a subject, a plain-text body and an HTML body with the same content and a
  * link back into the app. Everything a user typed is escaped in the HTML.
  */
-import type { ProjectRole } from '../../shared/types/api'
-import { reviewDecisionLabels, reviewStateLabels, type ReviewDecision, type ReviewState } from '../../shared/types/review'
-import { RF_SAFETY_CAUTION } from '../../shared/review/summary-lines'
+import type { ProjectRole } from '#shared/types/api'
+import { reviewDecisionLabels, reviewStateLabels, type ReviewDecision, type ReviewState } from '#shared/types/review'
+import { RF_SAFETY_CAUTION } from '#shared/review/summary-lines'
 
 export interface MailContent {
   subject: string

@@ -4,7 +4,7 @@
  * running count and refused the moment it passes the limit, and what was read is kept for the route.
  */
 import type { H3Event } from 'h3'
-import { TOUCHSTONE_LIMITS } from '../../shared/touchstone/limits'
+import { TOUCHSTONE_LIMITS } from '#shared/touchstone/limits'
 
 const BODY_METHODS = new Set(['POST', 'PUT', 'PATCH', 'DELETE'])
 

@@ -2,10 +2,10 @@ import type { H3Event } from 'h3'
 import { createHash, randomBytes } from 'node:crypto'
 import { z } from 'zod'
 import { Op } from 'sequelize'
-import { AccessToken, AccessTokenProject, Membership, Project, User } from '../database/models'
-import { ACCESS_TOKEN_PREFIX, type AccessTokenDto } from '../../shared/types/access-token'
-import { effectiveTokenRole } from '../../shared/automation/effective-role'
-import type { ProjectRole } from '../../shared/types/api'
+import { AccessToken, AccessTokenProject, Membership, Project, User } from '~~/server/database/models'
+import { ACCESS_TOKEN_PREFIX, type AccessTokenDto } from '#shared/types/access-token'
+import { effectiveTokenRole } from '#shared/automation/effective-role'
+import type { ProjectRole } from '#shared/types/api'
 
 /** A token's secret: the prefix and 32 random bytes (256 bits) in base64url. */
 const TOKEN_PATTERN = new RegExp(`^${ACCESS_TOKEN_PREFIX}[A-Za-z0-9_-]{43}$`)

@@ -1,6 +1,6 @@
 import type { H3Event } from 'h3'
 import { Op } from 'sequelize'
-import { AccountSession, PasswordReset, User } from '../database/models'
+import { AccountSession, PasswordReset, User } from '~~/server/database/models'
 import { useDatabase } from './database'
 import { hashSecretToken, newSecretToken } from './secret-token'
 

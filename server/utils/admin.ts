@@ -1,5 +1,5 @@
 import type { H3Event } from 'h3'
-import type { User } from '../database/models'
+import type { User } from '~~/server/database/models'
 
 /**
  * The gate for site-administrator routes. Everyone else gets 404, as for a project they

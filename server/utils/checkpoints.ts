@@ -5,9 +5,9 @@
  */
 import { randomUUID } from 'node:crypto'
 import { QueryTypes, type Transaction } from 'sequelize'
-import type { NetworkDocument } from '../../shared/network/types'
-import type { CheckpointReason } from '../../shared/types/history'
-import { CHECKPOINT_INTERVAL_MS, checkpointsToPrune } from '../../shared/history/checkpoint-retention'
+import type { NetworkDocument } from '#shared/network/types'
+import type { CheckpointReason } from '#shared/types/history'
+import { CHECKPOINT_INTERVAL_MS, checkpointsToPrune } from '#shared/history/checkpoint-retention'
 import { useDatabase } from './database'
 
 /**

@@ -1,5 +1,5 @@
 import type { H3Event } from 'h3'
-import type { User } from '../database/models'
+import type { User } from '~~/server/database/models'
 
 /**
  * The signed-in user, read fresh from the database on every request, with their session row

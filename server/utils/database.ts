@@ -1,5 +1,5 @@
 import type { Sequelize } from 'sequelize'
-import { connectDatabase } from '../database/connect'
+import { connectDatabase } from '~~/server/database/connect'
 
 let instance: Sequelize | undefined
 

@@ -1,5 +1,5 @@
-import type { Network, Project, User } from '../database/models'
-import type { NetworkDto, NetworkSummaryDto, ProjectDto, ProjectRole, UserDto } from '../../shared/types/api'
+import type { Network, Project, User } from '~~/server/database/models'
+import type { NetworkDto, NetworkSummaryDto, ProjectDto, ProjectRole, UserDto } from '#shared/types/api'
 
 /** Plain DTOs for the API; model instances never leave the server. */
 export function toUserDto(user: User): UserDto {

@@ -1,7 +1,7 @@
 import type { H3Event } from 'h3'
 import { z } from 'zod'
-import { NetworkCheckpoint, type Network } from '../database/models'
-import type { CheckpointListItemDto } from '../../shared/types/history'
+import { NetworkCheckpoint, type Network } from '~~/server/database/models'
+import type { CheckpointListItemDto } from '#shared/types/history'
 import { peopleById } from './review'
 
 /** Loads a checkpoint of the given network from the route's `checkpointId`; 404 when it is not there. */

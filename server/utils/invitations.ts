@@ -1,6 +1,6 @@
 import { createHash, randomBytes } from 'node:crypto'
-import type { Invitation } from '../database/models'
-import type { InvitationDto, InvitationStatus, PersonDto } from '../../shared/types/review'
+import type { Invitation } from '~~/server/database/models'
+import type { InvitationDto, InvitationStatus, PersonDto } from '#shared/types/review'
 
 /** How long an invitation link works. */
 export const INVITATION_LIFETIME_MS = 7 * 24 * 60 * 60 * 1000

@@ -1,7 +1,7 @@
 import type PgBoss from 'pg-boss'
-import { CHUNK_QUEUE, PLAN_QUEUE, chunkMessageId, openQueue, type PlanMessage } from '../jobs/queue'
-import type { Job } from '../database/models'
-import type { JobDto } from '../../shared/types/jobs'
+import { CHUNK_QUEUE, PLAN_QUEUE, chunkMessageId, openQueue, type PlanMessage } from '~~/server/jobs/queue'
+import type { Job } from '~~/server/database/models'
+import type { JobDto } from '#shared/types/jobs'
 
 let opening: Promise<PgBoss> | undefined
 

@@ -1,7 +1,7 @@
 import type { H3Event } from 'h3'
 import { z } from 'zod'
-import { Job } from '../database/models'
-import type { Network } from '../database/models'
+import { Job } from '~~/server/database/models'
+import type { Network } from '~~/server/database/models'
 
 const jobParams = z.object({ jobId: z.uuid() })
 

@@ -1,6 +1,6 @@
 import type { Transaction } from 'sequelize'
-import type { NetworkDocument } from '../../shared/network/types'
-import { applyDocumentToLiveState, mergeLiveState, notifyAccessChanged } from '../live/store'
+import type { NetworkDocument } from '#shared/network/types'
+import { applyDocumentToLiveState, mergeLiveState, notifyAccessChanged } from '~~/server/live/store'
 
 /**
  * A document saved through the REST API joins the live document as an update

@@ -1,9 +1,9 @@
 import { hostname } from 'node:os'
 import type { H3Event } from 'h3'
 import nodemailer, { type Transporter } from 'nodemailer'
-import { OutboxMessage } from '../database/models'
-import { startLocalSmtp, type LocalSmtp } from '../mail/local-smtp'
-import type { MailContent } from '../mail/messages'
+import { OutboxMessage } from '~~/server/database/models'
+import { startLocalSmtp, type LocalSmtp } from '~~/server/mail/local-smtp'
+import type { MailContent } from '~~/server/mail/messages'
 
 let transport: Promise<Transporter> | undefined
 let local: LocalSmtp | undefined

@@ -1,7 +1,7 @@
 import type { H3Event } from 'h3'
 import { z } from 'zod'
-import { Membership, User } from '../database/models'
-import type { MemberDto, ProjectRole } from '../../shared/types/api'
+import { Membership, User } from '~~/server/database/models'
+import type { MemberDto, ProjectRole } from '#shared/types/api'
 
 const memberParams = z.object({ projectId: z.uuid(), userId: z.uuid() })
 

@@ -1,6 +1,6 @@
 import type { H3Event } from 'h3'
 import { z } from 'zod'
-import { Network } from '../database/models'
+import { Network } from '~~/server/database/models'
 
 const networkParams = z.object({ projectId: z.uuid(), networkId: z.uuid() })
 

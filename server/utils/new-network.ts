@@ -1,4 +1,4 @@
-import type { NetworkDocument } from '../../shared/network/types'
+import type { NetworkDocument } from '#shared/network/types'
 
 /** A valid, empty network document: no blocks yet, a sweep around 2.45 GHz. */
 export function emptyNetworkDocument(name: string): NetworkDocument {

@@ -1,6 +1,6 @@
 import type { H3Event } from 'h3'
-import { PasswordReset, User } from '../database/models'
-import { passwordResetMail } from '../mail/messages'
+import { PasswordReset, User } from '~~/server/database/models'
+import { passwordResetMail } from '~~/server/mail/messages'
 
 /** How long a reset link works. */
 export const PASSWORD_RESET_LIFETIME_MS = 30 * 60 * 1000

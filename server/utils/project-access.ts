@@ -1,7 +1,7 @@
 import type { H3Event } from 'h3'
 import { z } from 'zod'
-import { Membership, Project, type User } from '../database/models'
-import type { ProjectRole } from '../../shared/types/api'
+import { Membership, Project, type User } from '~~/server/database/models'
+import type { ProjectRole } from '#shared/types/api'
 
 const rank: Record<ProjectRole, number> = { viewer: 0, reviewer: 1, editor: 2, owner: 3 }
 

@@ -1,4 +1,4 @@
-import { Network } from '../database/models'
+import { Network } from '~~/server/database/models'
 
 /** A project's network documents by id and by name (the first of a name wins), for resolving subnetworks. */
 export async function projectNetworksByRef(projectId: string): Promise<Array<[string, unknown]>> {

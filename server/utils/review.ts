@@ -1,13 +1,13 @@
 import type { H3Event } from 'h3'
 import { z } from 'zod'
-import { Comment, Network, Review, ReviewEvent, ReviewReviewer, Snapshot, StoredFile, User, type Project } from '../database/models'
-import type { NetworkDocument } from '../../shared/network/types'
+import { Comment, Network, Review, ReviewEvent, ReviewReviewer, Snapshot, StoredFile, User, type Project } from '~~/server/database/models'
+import type { NetworkDocument } from '#shared/network/types'
 import type {
   CommentAnchor, CommentDto, PersonDto, ReviewDto, SnapshotListItemDto, SnapshotSummary,
-} from '../../shared/types/review'
-import { findMentions, findUnmatchedMentions, type UnmatchedMention } from '../../shared/review/mentions'
-import { formatHz } from '../../shared/review/summary-lines'
-import { mentionMail } from '../mail/messages'
+} from '#shared/types/review'
+import { findMentions, findUnmatchedMentions, type UnmatchedMention } from '#shared/review/mentions'
+import { formatHz } from '#shared/review/summary-lines'
+import { mentionMail } from '~~/server/mail/messages'
 import { listMembers } from './members'
 import { summariseInPool } from './solve-pool'
 

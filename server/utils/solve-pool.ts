@@ -1,11 +1,11 @@
 import { existsSync } from 'node:fs'
 import { dirname, join } from 'node:path'
 import { Piscina } from 'piscina'
-import summariseInProcess, { type SummaryTask } from '../workers/solve-summary'
-import solveApiInProcess, { type ApiSolveTask } from '../workers/solve-api'
-import readTouchstoneInProcess, { type ReadTouchstoneOutcome, type ReadTouchstoneTask } from '../workers/read-touchstone'
-import type { SnapshotSummary } from '../../shared/review/snapshot-summary'
-import type { ApiSolveOutcome } from '../../shared/automation/api-solve'
+import summariseInProcess, { type SummaryTask } from '~~/server/workers/solve-summary'
+import solveApiInProcess, { type ApiSolveTask } from '~~/server/workers/solve-api'
+import readTouchstoneInProcess, { type ReadTouchstoneOutcome, type ReadTouchstoneTask } from '~~/server/workers/read-touchstone'
+import type { SnapshotSummary } from '#shared/review/snapshot-summary'
+import type { ApiSolveOutcome } from '#shared/automation/api-solve'
 
 /** File name of the bundled worker beside the built server's entry (`.output/server/workers/`). */
 export const SOLVE_WORKER_FILE = 'workers/solve-summary.mjs'

@@ -1,9 +1,9 @@
 import type { H3Event } from 'h3'
 import { z } from 'zod'
-import { Network, StoredFile, User } from '../database/models'
-import { TOUCHSTONE_LIMITS } from '../../shared/touchstone/limits'
-import type { TouchstoneFile } from '../../shared/touchstone/types'
-import type { StoredFileDto, StoredFileSummary } from '../../shared/types/api'
+import { Network, StoredFile, User } from '~~/server/database/models'
+import { TOUCHSTONE_LIMITS } from '#shared/touchstone/limits'
+import type { TouchstoneFile } from '#shared/touchstone/types'
+import type { StoredFileDto, StoredFileSummary } from '#shared/types/api'
 
 // Names become references in documents and download file names: plain characters and a Touchstone extension.
 const FILE_NAME = /^[A-Za-z0-9][A-Za-z0-9 ._()-]{0,118}\.s\d{1,2}p$/i

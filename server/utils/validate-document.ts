@@ -1,5 +1,5 @@
-import { parseNetworkDocument } from '../../shared/network/schema'
-import type { NetworkDocument } from '../../shared/network/types'
+import { parseNetworkDocument } from '#shared/network/schema'
+import type { NetworkDocument } from '#shared/network/types'
 
 /** Checks a network document against the contract's schema; answers 422 listing every problem. */
 export function requireValidDocument(input: unknown): NetworkDocument {

@@ -3,9 +3,9 @@
  * see nuxt.config.ts). A file of several MiB takes a second or more to read: here it costs a pool thread with the
  * solve budget, not the event loop every team shares. A malformed file comes back as its line and reason.
  */
-import { TouchstoneError } from '../../shared/touchstone/error'
-import { portsFromFileName, readTouchstone } from '../../shared/touchstone/read'
-import type { TouchstoneFile } from '../../shared/touchstone/types'
+import { TouchstoneError } from '#shared/touchstone/error'
+import { portsFromFileName, readTouchstone } from '#shared/touchstone/read'
+import type { TouchstoneFile } from '#shared/touchstone/types'
 
 /** The file's name (for the port count of its `.sNp` extension) and its text as stored (latin1). */
 export interface ReadTouchstoneTask {

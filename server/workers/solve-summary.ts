@@ -3,9 +3,9 @@
  * a snapshot summary of a document with its project's networks for subnetworks. Runs inside the solve pool's
  * time and memory budget, never on the event loop that answers every team.
  */
-import { snapshotSummary, type SnapshotSummary } from '../../shared/review/snapshot-summary'
-import type { DataSet } from '../../shared/solver/types'
-import { portsFromFileName, readTouchstone } from '../../shared/touchstone/read'
+import { snapshotSummary, type SnapshotSummary } from '#shared/review/snapshot-summary'
+import type { DataSet } from '#shared/solver/types'
+import { portsFromFileName, readTouchstone } from '#shared/touchstone/read'
 
 /** What one solve needs: the document, the project's networks by id and by name, and its data files by name (as text). */
 export interface SummaryTask {

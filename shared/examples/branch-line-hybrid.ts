@@ -15,13 +15,13 @@ export const branchLineHybrid: NetworkDocument = {
     { id: 'P4', type: 'port', params: { index: 4 }, layout: { x: 0, y: 240 } },
     { id: 'T12', type: 'line', params: { impedance: 'Z0/sqrt(2)', degrees: 90, at: 'f0' }, layout: { x: 240, y: 0 } },
     { id: 'T43', type: 'line', params: { impedance: 'Z0/sqrt(2)', degrees: 90, at: 'f0' }, layout: { x: 240, y: 240 } },
-    { id: 'S14', type: 'line', params: { impedance: 'Z0', degrees: 90, at: 'f0' }, layout: { x: 120, y: 120, rotation: 90 } },
-    { id: 'S23', type: 'line', params: { impedance: 'Z0', degrees: 90, at: 'f0' }, layout: { x: 360, y: 120, rotation: 90 } },
+    { id: 'BR14', type: 'line', params: { impedance: 'Z0', degrees: 90, at: 'f0' }, layout: { x: 120, y: 120, rotation: 90 } },
+    { id: 'BR23', type: 'line', params: { impedance: 'Z0', degrees: 90, at: 'f0' }, layout: { x: 360, y: 120, rotation: 90 } },
   ],
   wires: [
     ['P1.1', 'T12.1'], ['T12.2', 'P2.1'],
     ['P4.1', 'T43.1'], ['T43.2', 'P3.1'],
-    ['P1.1', 'S14.1'], ['S14.2', 'P4.1'],
-    ['P2.1', 'S23.1'], ['S23.2', 'P3.1'],
+    ['P1.1', 'BR14.1'], ['BR14.2', 'P4.1'],
+    ['P2.1', 'BR23.1'], ['BR23.2', 'P3.1'],
   ],
 }

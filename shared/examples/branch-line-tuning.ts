@@ -7,7 +7,7 @@ import { branchLineHybrid } from './branch-line-hybrid'
  * start 20 % high and the shunt arms 20 % low, for the optimiser to bring back.
  */
 export function branchLineTuning(detune: boolean): NetworkDocument {
-  const scale: Record<string, string> = detune ? { T12: '1.2 * ', T43: '1.2 * ', S14: '0.8 * ', S23: '0.8 * ' } : {}
+  const scale: Record<string, string> = detune ? { T12: '1.2 * ', T43: '1.2 * ', BR14: '0.8 * ', BR23: '0.8 * ' } : {}
   return {
     ...structuredClone(branchLineHybrid),
     version: 1.1,
@@ -29,14 +29,14 @@ export function branchLineTuning(detune: boolean): NetworkDocument {
     tunables: {
       'T12.impedance': { min: '25 ohm', max: '50 ohm' },
       'T43.impedance': { min: '25 ohm', max: '50 ohm' },
-      'S14.impedance': { min: '35 ohm', max: '70 ohm' },
-      'S23.impedance': { min: '35 ohm', max: '70 ohm' },
+      'BR14.impedance': { min: '35 ohm', max: '70 ohm' },
+      'BR23.impedance': { min: '35 ohm', max: '70 ohm' },
     },
     tolerances: {
       'T12.impedance': { relative: 0.03 },
       'T43.impedance': { relative: 0.03 },
-      'S14.impedance': { relative: 0.03 },
-      'S23.impedance': { relative: 0.03 },
+      'BR14.impedance': { relative: 0.03 },
+      'BR23.impedance': { relative: 0.03 },
       'T12.degrees': { absolute: '2 deg', distribution: 'normal' },
       'T43.degrees': { absolute: '2 deg', distribution: 'normal' },
     },

@@ -52,13 +52,13 @@ describe('live co-editing in the browser', () => {
 
     // Tomas places a line and sets its impedance; Ines sees both.
     await tomas.click('[data-testid="rail-line"]')
-    await ines.waitForSelector('[data-testid="block-TL1"]', { timeout: 10_000 })
-    await tomas.click('[data-testid="block-TL1"]')
+    await ines.waitForSelector('[data-testid="block-LN1"]', { timeout: 10_000 })
+    await tomas.click('[data-testid="block-LN1"]')
     await tomas.fill('[data-testid="param-impedance"]', '35.36')
 
     // Tomas's selection is outlined on Ines's canvas in his colour.
-    await ines.waitForSelector('[data-testid="remote-selection-TL1"]', { timeout: 10_000 })
-    const colour = await ines.getAttribute('[data-testid="remote-selection-TL1"]', 'stroke')
+    await ines.waitForSelector('[data-testid="remote-selection-LN1"]', { timeout: 10_000 })
+    const colour = await ines.getAttribute('[data-testid="remote-selection-LN1"]', 'stroke')
     const chip = await ines.getAttribute('[data-testid="live-peer"][data-initials="TR"]', 'style')
     expect(chip).toContain(colour!)
     await ines.screenshot({ path: `${shots}/owner-sees-selection.png` })
@@ -67,13 +67,13 @@ describe('live co-editing in the browser', () => {
     // The line was placed in the middle of Tomas's view, which may be outside Ines's: fit the network in view first.
     await ines.keyboard.press('0')
     await ines.waitForTimeout(400)
-    await ines.click('[data-testid="block-TL1"]')
+    await ines.click('[data-testid="block-LN1"]')
     await expect.poll(() => ines.inputValue('[data-testid="param-impedance"]'), { timeout: 10_000 }).toBe('35.36')
 
     // Undo at Ines's takes back her port only, not Tomas's line.
     await ines.click('[data-testid="undo"]')
     await tomas.waitForSelector('[data-testid="block-P1"]', { state: 'detached', timeout: 10_000 })
-    expect(await tomas.$('[data-testid="block-TL1"]')).not.toBeNull()
+    expect(await tomas.$('[data-testid="block-LN1"]')).not.toBeNull()
 
     await ines.screenshot({ path: `${shots}/owner.png` })
     await tomas.screenshot({ path: `${shots}/editor.png` })

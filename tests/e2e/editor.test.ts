@@ -92,14 +92,14 @@ describe('network editor', () => {
 
     for (const kind of ['port', 'port', 'port', 'port', 'line', 'line', 'line', 'line']) await page.click(`[data-testid="rail-${kind}"]`)
     // Through arms (1–2, 4–3) of Z0/√2, branch arms (1–4, 2–3) of Z0, all a quarter wave at f0.
-    await setParams('TL1', { impedance: '50 ohm / sqrt(2)', degrees: '90', at: 'f0' })
-    await setParams('TL2', { impedance: '50 ohm / sqrt(2)', degrees: '90', at: 'f0' })
-    await setParams('TL3', { impedance: '50', degrees: '90', at: 'f0' })
-    await setParams('TL4', { impedance: '50', degrees: '90', at: 'f0' })
+    await setParams('LN1', { impedance: '50 ohm / sqrt(2)', degrees: '90', at: 'f0' })
+    await setParams('LN2', { impedance: '50 ohm / sqrt(2)', degrees: '90', at: 'f0' })
+    await setParams('LN3', { impedance: '50', degrees: '90', at: 'f0' })
+    await setParams('LN4', { impedance: '50', degrees: '90', at: 'f0' })
     await expect.poll(() => page.textContent('[data-testid="param-impedance-note"]')).toContain('50 Ω')
     const wires: Array<[string, number, string]> = [
-      ['TL1', 1, 'P1.1'], ['TL1', 2, 'P2.1'], ['TL2', 1, 'P4.1'], ['TL2', 2, 'P3.1'],
-      ['TL3', 1, 'P1.1'], ['TL3', 2, 'P4.1'], ['TL4', 1, 'P2.1'], ['TL4', 2, 'P3.1'],
+      ['LN1', 1, 'P1.1'], ['LN1', 2, 'P2.1'], ['LN2', 1, 'P4.1'], ['LN2', 2, 'P3.1'],
+      ['LN3', 1, 'P1.1'], ['LN3', 2, 'P4.1'], ['LN4', 1, 'P2.1'], ['LN4', 2, 'P3.1'],
     ]
     for (const [id, n, to] of wires) await wire(id, n, to)
     await page.waitForSelector('[data-testid="results-fresh"]:has-text("4-port")')
@@ -121,7 +121,7 @@ describe('network editor', () => {
     await page.locator('[data-testid="results-dock"]').screenshot({ path: `${shots}/smith.png` })
 
     await page.reload()
-    await page.waitForSelector('[data-testid="block-TL4"]')
+    await page.waitForSelector('[data-testid="block-LN4"]')
     await page.waitForSelector('[data-testid="results-fresh"]:has-text("4-port")')
     await page.click('[data-testid="view-tab-response"]')
     await placeMarkerAt('2.45 GHz')

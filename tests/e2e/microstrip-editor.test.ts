@@ -40,9 +40,9 @@ describe('microstrip in the editor', () => {
     await page.waitForSelector('[data-testid="rail-microstrip"]')
 
     for (const kind of ['port', 'port', 'microstrip']) await page.click(`[data-testid="rail-${kind}"]`)
-    await select('MS1')
-    await page.selectOption('[data-testid="connect-MS1.1"]', 'P1.1')
-    await page.selectOption('[data-testid="connect-MS1.2"]', 'P2.1')
+    await select('MT1')
+    await page.selectOption('[data-testid="connect-MT1.1"]', 'P1.1')
+    await page.selectOption('[data-testid="connect-MT1.2"]', 'P2.1')
     await page.waitForSelector('[data-testid="results-fresh"]:has-text("2-port")')
     expect(await page.$('[data-testid="solve-problems"]')).toBeNull()
     expect(await page.inputValue('[data-testid="param-substrate"]')).toBe('board')

@@ -79,6 +79,6 @@ describe('tune and tolerance panel', () => {
     await page.waitForFunction(() => !document.querySelector('[data-testid="tune-T12.impedance"]')?.textContent?.includes('42.43 Ω'))
     await page.click('[data-testid="undo"]')
     await page.waitForFunction(() => document.querySelector('[data-testid="tune-T12.impedance"]')?.textContent?.includes('42.43 Ω'))
-    await page.waitForFunction(() => document.querySelector('[data-testid="tune-S14.impedance"]')?.textContent?.includes('40 Ω'))
+    await page.waitForFunction(() => document.querySelector('[data-testid="tune-BR14.impedance"]')?.textContent?.includes('40 Ω'))
   })
 })

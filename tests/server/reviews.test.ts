@@ -72,12 +72,12 @@ describe('snapshots', () => {
   it('compare with the live network: the changed parameter, and nothing else', async () => {
     const made = await snapshot('Compare base')
     await saveDocument(editor.client, (d) => {
-      d.blocks.find(b => b.id === 'S14')!.params.impedance = 52
+      d.blocks.find(b => b.id === 'BR14')!.params.impedance = 52
     })
     const compared = await viewer.client.get(`${base}/snapshots/${made.id}/compare?with=live`)
     expect(compared.status, JSON.stringify(compared.body)).toBe(200)
     expect(compared.body.after.kind).toBe('live')
-    expect(compared.body.diff.entries).toEqual([{ area: 'parameter', change: 'changed', subject: 'S14.impedance', before: 'Z0', after: '52' }])
+    expect(compared.body.diff.entries).toEqual([{ area: 'parameter', change: 'changed', subject: 'BR14.impedance', before: 'Z0', after: '52' }])
     const later = await snapshot('Compare later')
     const between = await viewer.client.get(`${base}/snapshots/${made.id}/compare?with=${later.id}`)
     expect(between.body.diff.entries).toEqual(compared.body.diff.entries)
@@ -163,7 +163,7 @@ describe('reviews, comments and their e-mail', () => {
     expect((await r2.client.post(`${base}/snapshots/${snap.id}/comments`, { body: 'x', anchor: { kind: 'block', blockId: 'NOPE' } })).status).toBe(400)
     expect((await viewer.client.post(`${base}/snapshots/${snap.id}/comments`, { body: 'may I?' })).status).toBe(403)
 
-    const reply = await editor.client.post(`${base}/snapshots/${snap.id}/comments`, { body: 'Agreed, widening S23.', parentId: band.body.id })
+    const reply = await editor.client.post(`${base}/snapshots/${snap.id}/comments`, { body: 'Agreed, widening BR23.', parentId: band.body.id })
     expect(reply.body.parentId).toBe(band.body.id)
     expect(reply.body.anchor).toEqual(band.body.anchor)
     expect((await r1.client.post(`${base}/snapshots/${snap.id}/comments`, { body: 'nested', parentId: reply.body.id })).status).toBe(400)
@@ -186,7 +186,7 @@ describe('reviews, comments and their e-mail', () => {
 
     const all = await viewer.client.get(`${base}/snapshots/${snap.id}/comments`)
     expect(all.body.map((c: { body: string }) => c.body)).toEqual([
-      `@${editor.email.split('@')[0]} is T12 at Z0/√2 on purpose?`, `Isolation is thin up here, ${mentionR1}`, 'Agreed, widening S23.',
+      `@${editor.email.split('@')[0]} is T12 at Z0/√2 on purpose?`, `Isolation is thin up here, ${mentionR1}`, 'Agreed, widening BR23.',
     ])
   })
 

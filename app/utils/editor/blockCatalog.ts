@@ -95,7 +95,7 @@ export const blockCatalog: Record<BlockKind, KindSpec> = {
     ],
   },
   line: {
-    kind: 'line', label: 'Line', hint: 'Transmission line: impedance and electrical length', idPrefix: 'TL',
+    kind: 'line', label: 'Line', hint: 'Transmission line: impedance and electrical length', idPrefix: 'LN',
     width: 4, height: 2, terminals: two(4, 2),
     defaults: { impedance: 50, degrees: 90, at: '1 GHz' },
     fields: lineFields,
@@ -107,7 +107,7 @@ export const blockCatalog: Record<BlockKind, KindSpec> = {
     fields: [...lineFields, { param: 'end', label: 'Far end', choices: ['open', 'short'], required: true }],
   },
   load: {
-    kind: 'load', label: 'Load', hint: 'Series R-L-C to ground, or an open, short or matched end', idPrefix: 'RL',
+    kind: 'load', label: 'Load', hint: 'Series R-L-C to ground, or an open, short or matched end', idPrefix: 'LD',
     width: 2, height: 4, terminals: [{ n: 1, x: 1, y: 0, side: 'top' }],
     defaults: { resistance: 50 },
     fields: [{ param: 'end', label: 'End', choices: ['open', 'short', 'matched'], placeholder: 'R-L-C' }, ...rlcFields.map(f => ({ ...f, when: (p: Record<string, ParamValue>) => p.end === undefined }))],
@@ -196,7 +196,7 @@ export const blockCatalog: Record<BlockKind, KindSpec> = {
     fields: [impedanceField, { param: 'db', label: 'Loss', unit: 'dB', required: true }],
   },
   microstrip: {
-    kind: 'microstrip', label: 'Microstrip', hint: 'Microstrip line on a named substrate', idPrefix: 'MS',
+    kind: 'microstrip', label: 'Microstrip', hint: 'Microstrip line on a named substrate', idPrefix: 'MT',
     width: 4, height: 2, terminals: two(4, 2),
     defaults: { width: '1.1 mm', length: '20 mm' },
     fields: [

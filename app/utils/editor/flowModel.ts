@@ -6,6 +6,7 @@ import type { BlockSpec, NetworkDocument } from '~~/shared/network/types'
 import { GRID, kindSpec, type Side } from './blockCatalog'
 import { layoutOf, parseTerminal, wireCount, wireKey, type Wire } from './documentOps'
 import { orientedSize, placeTerminal, type Rotation } from './geometry'
+import { routeJunctions, storedRoute } from './wireRoutes'
 import { externalShape, type ExternalPorts } from './externalTerminals'
 
 /** Ports of a data or subnetwork block when the editor knows them. */
@@ -61,7 +62,9 @@ export interface FlowEdge {
   targetHandle: string
   type: string
   selected: boolean
-  data: { wire: Wire }
+  /** `route`: the stored orthogonal route (from tidy), drawn while it still meets both terminals. */
+  /** `dots`: where this wire parts from another of the same terminal along stored routes (junction dots). */
+  data: { wire: Wire, route?: Array<[number, number]>, dots?: Array<[number, number]> }
 }
 
 /** Terminals of a block whose kind the editor cannot draw: as many as its wires mention, down its left side. */
@@ -133,8 +136,16 @@ export function documentEdges(doc: NetworkDocument, selected: ReadonlySet<string
     const id = wireKey(w)
     edges.push({
       id, source: a.block, sourceHandle: String(a.n), target: b.block, targetHandle: String(b.n),
-      type: 'wire', selected: selected.has(id), data: { wire: w },
+      type: 'wire', selected: selected.has(id), data: { wire: w, route: storedRoute(doc, id) },
     })
+  }
+  const routes: Record<string, Array<[number, number]>> = {}
+  for (const e of edges) if (e.data.route) routes[e.id] = e.data.route
+  if (Object.keys(routes).length) {
+    for (const j of routeJunctions(edges.map(e => e.data.wire), routes, wireKey)) {
+      const edge = edges.find(e => e.id === j.wire)
+      if (edge) (edge.data.dots ??= []).push(j.at)
+    }
   }
   return edges
 }

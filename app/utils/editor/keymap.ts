@@ -7,7 +7,7 @@ export type EditorAction =
   | 'help' | 'escape' | 'undo' | 'redo' | 'copy' | 'paste' | 'duplicate' | 'delete' | 'selectAll'
   | 'selectNext' | 'selectPrevious' | 'turnClockwise' | 'turnAnticlockwise' | 'mirror'
   | 'nudgeLeft' | 'nudgeRight' | 'nudgeUp' | 'nudgeDown' | 'jumpLeft' | 'jumpRight' | 'jumpUp' | 'jumpDown'
-  | 'zoomIn' | 'zoomOut' | 'fit' | 'focusRail' | 'focusWires' | 'settings' | 'save'
+  | 'zoomIn' | 'zoomOut' | 'fit' | 'tidy' | 'focusRail' | 'focusWires' | 'settings' | 'save'
   | 'addMarker' | 'removeMarker' | 'markerLeft' | 'markerRight' | 'markerJumpLeft' | 'markerJumpRight'
   | 'viewResponse' | 'viewSmith' | 'viewBalance' | 'viewTable' | 'viewSpec' | 'viewArray'
 
@@ -53,6 +53,7 @@ export const keymap: readonly KeyBinding[] = [
   { combos: ['=', '+', 'shift++'], label: '+', action: 'zoomIn', description: 'Zoom in', group: 'Canvas' },
   { combos: ['-'], label: '−', action: 'zoomOut', description: 'Zoom out', group: 'Canvas' },
   { combos: ['0'], label: '0', action: 'fit', description: 'Fit the network in view', group: 'Canvas' },
+  { combos: ['l'], label: 'L', action: 'tidy', description: 'Tidy: lay the network out left to right, wires routed around blocks', group: 'Canvas', edits: true },
   { combos: ['m'], label: 'M', action: 'addMarker', description: 'Place a frequency marker mid-sweep', group: 'Results' },
   { combos: ['shift+m'], label: 'Shift M', action: 'removeMarker', description: 'Remove the active marker', group: 'Results' },
   { combos: [','], label: ',', action: 'markerLeft', description: 'Move the active marker one sweep point down', group: 'Results' },

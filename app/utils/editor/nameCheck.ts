@@ -16,7 +16,7 @@ export function checkNetworkName(text: string): { ok: true, name: string } | { o
 
 /** Why `to` cannot be the new id of block `from`, or null when it can. */
 export function blockIdProblem(doc: NetworkDocument, from: string, to: string): string | null {
-  if (!to) return 'The block name is empty: enter a name such as TL1'
+  if (!to) return 'The block name is empty: enter a name such as LN1'
   if (to.length > BLOCK_ID_MAX) return `The block name is too long: ${to.length} characters, at most ${BLOCK_ID_MAX}`
   if (!/^[A-Za-z_]/.test(to)) return 'A block name starts with a letter or _'
   if (!/^[A-Za-z0-9_]+$/.test(to)) return 'A block name uses letters, digits and _ only'

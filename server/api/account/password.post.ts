@@ -1,5 +1,5 @@
-import { passwordChangeSchema } from '../../../shared/schemas/auth'
-import { passwordChangedMail } from '../../mail/messages'
+import { passwordChangeSchema } from '#shared/schemas/auth'
+import { passwordChangedMail } from '~~/server/mail/messages'
 
 /**
  * Changes the signed-in account's password. The current password is checked under the sign-in limits (a limiter

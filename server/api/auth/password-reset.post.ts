@@ -1,4 +1,4 @@
-import { passwordResetRequestSchema } from '../../../shared/schemas/auth'
+import { passwordResetRequestSchema } from '#shared/schemas/auth'
 
 /**
  * "Forgot your password?": mails a reset link to the account with this address. Public, and it answers every

@@ -1,5 +1,5 @@
-import { signInSchema } from '../../../shared/schemas/auth'
-import { User } from '../../database/models'
+import { signInSchema } from '#shared/schemas/auth'
+import { User } from '~~/server/database/models'
 
 // A real scrypt hash of a random string: verifying against it when the account is
 // missing keeps the answer time the same whether or not the account exists.

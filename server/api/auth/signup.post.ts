@@ -1,6 +1,6 @@
 import { UniqueConstraintError } from 'sequelize'
-import { signUpSchema } from '../../../shared/schemas/auth'
-import { User } from '../../database/models'
+import { signUpSchema } from '#shared/schemas/auth'
+import { User } from '~~/server/database/models'
 
 /** Creates an account and signs it in. */
 export default defineEventHandler(async (event) => {

@@ -1,7 +1,7 @@
 import { z } from 'zod'
-import { invitationTokenSchema } from '../../../shared/schemas/review'
-import { Invitation, Project, User } from '../../database/models'
-import type { InvitationPreviewDto } from '../../../shared/types/review'
+import { invitationTokenSchema } from '#shared/schemas/review'
+import { Invitation, Project, User } from '~~/server/database/models'
+import type { InvitationPreviewDto } from '#shared/types/review'
 
 /**
  * What an invitation link is for, shown before accepting. Public by design: holding the

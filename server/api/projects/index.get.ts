@@ -1,4 +1,4 @@
-import { Membership, Project } from '../../database/models'
+import { Membership, Project } from '~~/server/database/models'
 
 /** The caller's projects with their role in each. */
 export default defineEventHandler(async (event) => {

@@ -1,5 +1,5 @@
-import { createProjectSchema } from '../../../shared/schemas/project'
-import { Membership, Project } from '../../database/models'
+import { createProjectSchema } from '#shared/schemas/project'
+import { Membership, Project } from '~~/server/database/models'
 
 /** Creates a project; its creator becomes the owner. */
 export default defineEventHandler(async (event) => {

@@ -1,5 +1,5 @@
 import { QueryTypes } from 'sequelize'
-import type { WaitingReviewDto } from '../../../shared/types/waiting-review'
+import type { WaitingReviewDto } from '#shared/types/waiting-review'
 
 /**
  * The reviews, across every project, that wait for the signed-in member's own decision:

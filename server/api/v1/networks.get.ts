@@ -1,6 +1,6 @@
-import { Network } from '../../database/models'
-import { apiNetworksQuerySchema } from '../../../shared/schemas/access-token'
-import type { AutomationNetworkDto } from '../../../shared/types/access-token'
+import { Network } from '~~/server/database/models'
+import { apiNetworksQuerySchema } from '#shared/schemas/access-token'
+import type { AutomationNetworkDto } from '#shared/types/access-token'
 
 /** The networks of one project in the token's scope (id, name, revision, last change), so scripts can find ids. */
 export default defineEventHandler(async (event): Promise<AutomationNetworkDto[]> => {

@@ -1,6 +1,6 @@
-import { Network } from '../../database/models'
-import { apiSolveSchema } from '../../../shared/schemas/access-token'
-import { SAFETY_NOTE } from '../../../shared/solver/safety-note'
+import { Network } from '~~/server/database/models'
+import { apiSolveSchema } from '#shared/schemas/access-token'
+import { SAFETY_NOTE } from '#shared/solver/safety-note'
 
 /**
  * Solves a network for a script (bearer token only): a document sent in the body, or a stored network the token

@@ -1,6 +1,6 @@
-import { AccessTokenProject, Membership, Project } from '../../database/models'
-import type { TokenSelfDto } from '../../../shared/types/access-token'
-import { effectiveTokenRole } from '../../../shared/automation/effective-role'
+import { AccessTokenProject, Membership, Project } from '~~/server/database/models'
+import type { TokenSelfDto } from '#shared/types/access-token'
+import { effectiveTokenRole } from '#shared/automation/effective-role'
 
 /**
  * What the calling token may do now: its name, expiry, ceiling and its effective role in each project of its

@@ -18,21 +18,21 @@ describe('editor store', () => {
     const p1 = s.addBlock('port', { x: 0, y: 0 })
     const p2 = s.addBlock('port', { x: 0, y: 80 })
     const l = s.addBlock('line', { x: 80, y: 0 })
-    expect([p1, p2, l]).toEqual(['P1', 'P2', 'TL1'])
+    expect([p1, p2, l]).toEqual(['P1', 'P2', 'LN1'])
     expect(s.doc.blocks.map(b => b.params.index)).toEqual([1, 2, undefined])
-    expect(s.selection.blocks).toEqual(['TL1'])
+    expect(s.selection.blocks).toEqual(['LN1'])
   })
 
   it('wires terminals and refuses duplicates, self-wires and missing terminals', () => {
     const s = store()
     s.addBlock('port', { x: 0, y: 0 })
     s.addBlock('line', { x: 80, y: 0 })
-    expect(s.connect('P1.1', 'TL1.1')).toBe(true)
-    expect(s.connect('TL1.1', 'P1.1')).toBe(false)
-    expect(s.connect('TL1.1', 'TL1.1')).toBe(false)
-    expect(s.connect('TL1.3', 'P1.1')).toBe(false)
-    expect(s.connect('P1.2', 'TL1.2')).toBe(false)
-    expect(s.doc.wires).toEqual([['P1.1', 'TL1.1']])
+    expect(s.connect('P1.1', 'LN1.1')).toBe(true)
+    expect(s.connect('LN1.1', 'P1.1')).toBe(false)
+    expect(s.connect('LN1.1', 'LN1.1')).toBe(false)
+    expect(s.connect('LN1.3', 'P1.1')).toBe(false)
+    expect(s.connect('P1.2', 'LN1.2')).toBe(false)
+    expect(s.doc.wires).toEqual([['P1.1', 'LN1.1']])
   })
 
   it('rotates a block a quarter turn and back, keeping it on the grid', () => {
@@ -52,13 +52,13 @@ describe('editor store', () => {
     s.addBlock('port', { x: 0, y: 80 })
     s.addBlock('port', { x: 0, y: 160 })
     s.addBlock('line', { x: 80, y: 0 })
-    s.connect('P2.1', 'TL1.1')
-    s.connect('P3.1', 'TL1.2')
+    s.connect('P2.1', 'LN1.1')
+    s.connect('P3.1', 'LN1.2')
     s.select(['P2'])
     s.deleteSelection()
-    expect(s.doc.blocks.map(b => b.id)).toEqual(['P1', 'P3', 'TL1'])
+    expect(s.doc.blocks.map(b => b.id)).toEqual(['P1', 'P3', 'LN1'])
     expect(s.doc.blocks.find(b => b.id === 'P3')!.params.index).toBe(2)
-    expect(s.doc.wires).toEqual([['P3.1', 'TL1.2']])
+    expect(s.doc.wires).toEqual([['P3.1', 'LN1.2']])
     expect(s.selection.blocks).toEqual([])
   })
 
@@ -68,9 +68,9 @@ describe('editor store', () => {
     const steps = [
       () => s.addBlock('port', { x: 0, y: 0 }),
       () => s.addBlock('line', { x: 80, y: 0 }),
-      () => s.connect('P1.1', 'TL1.1'),
+      () => s.connect('P1.1', 'LN1.1'),
       () => s.rotateSelection(1),
-      () => s.setParam('TL1', 'impedance', 'Z0/sqrt(2)'),
+      () => s.setParam('LN1', 'impedance', 'Z0/sqrt(2)'),
       () => s.moveBlocks({ P1: { x: 40, y: 40 } }),
       () => { s.select(['P1']); s.deleteSelection() },
     ]
@@ -93,7 +93,7 @@ describe('editor store', () => {
   it('collapses typing in one field into one undo step', () => {
     const s = store()
     s.addBlock('line', { x: 0, y: 0 })
-    for (const v of ['3', '35', '35.', '35.3']) s.setParam('TL1', 'impedance', v)
+    for (const v of ['3', '35', '35.', '35.3']) s.setParam('LN1', 'impedance', v)
     expect(s.doc.blocks[0]!.params.impedance).toBe('35.3')
     s.undo()
     expect(s.doc.blocks[0]!.params.impedance).toBe(50)
@@ -103,13 +103,13 @@ describe('editor store', () => {
     const s = store()
     s.addBlock('port', { x: 0, y: 0 })
     s.addBlock('line', { x: 80, y: 0 })
-    s.connect('P1.1', 'TL1.1')
-    s.select(['P1', 'TL1'])
+    s.connect('P1.1', 'LN1.1')
+    s.select(['P1', 'LN1'])
     s.duplicateSelection()
-    expect(s.doc.blocks.map(b => b.id)).toEqual(['P1', 'TL1', 'P2', 'TL2'])
+    expect(s.doc.blocks.map(b => b.id)).toEqual(['P1', 'LN1', 'P2', 'LN2'])
     expect(s.doc.blocks[2]!.params.index).toBe(2)
-    expect(s.doc.wires).toEqual([['P1.1', 'TL1.1'], ['P2.1', 'TL2.1']])
-    expect(s.selection.blocks).toEqual(['P2', 'TL2'])
+    expect(s.doc.wires).toEqual([['P1.1', 'LN1.1'], ['P2.1', 'LN2.1']])
+    expect(s.selection.blocks).toEqual(['P2', 'LN2'])
   })
 
   it('is read-only for viewers: edits are ignored', () => {

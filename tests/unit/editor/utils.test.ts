@@ -68,13 +68,13 @@ describe('canvas model', () => {
     addBlock(doc, 'port', { x: 0, y: 0 })
     addBlock(doc, 'line', { x: 100, y: 0 })
     addBlock(doc, 'stub', { x: 100, y: 100 })
-    connect(doc, 'P1.1', 'TL1.1')
+    connect(doc, 'P1.1', 'LN1.1')
     connect(doc, 'P1.1', 'ST1.1')
-    const nodes = documentNodes(doc, { selected: new Set(['TL1']), problems: { ST1: 'bad' }, readOnly: false })
-    expect(nodes.map(n => [n.id, n.type, n.selected])).toEqual([['P1', 'port', false], ['TL1', 'line', true], ['ST1', 'stub', false]])
+    const nodes = documentNodes(doc, { selected: new Set(['LN1']), problems: { ST1: 'bad' }, readOnly: false })
+    expect(nodes.map(n => [n.id, n.type, n.selected])).toEqual([['P1', 'port', false], ['LN1', 'line', true], ['ST1', 'stub', false]])
     expect(nodes[0]!.data.terminals[0]!.wires).toBe(2)
     expect(nodes[2]!.data.problem).toBe('bad')
-    expect(documentEdges(doc, new Set()).map(e => [e.source, e.sourceHandle, e.target, e.targetHandle])).toEqual([['P1', '1', 'TL1', '1'], ['P1', '1', 'ST1', '1']])
+    expect(documentEdges(doc, new Set()).map(e => [e.source, e.sourceHandle, e.target, e.targetHandle])).toEqual([['P1', '1', 'LN1', '1'], ['P1', '1', 'ST1', '1']])
   })
 
   it('shows the IEC parts a load holds', () => {

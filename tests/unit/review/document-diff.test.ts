@@ -26,12 +26,12 @@ describe('document diff', () => {
 
   it('lists added and removed parameters of a kept block', () => {
     const after = copy()
-    const line = after.blocks.find(b => b.id === 'S14')!
+    const line = after.blocks.find(b => b.id === 'BR14')!
     line.params.lossDb = 0.05
     delete (line.params as Record<string, unknown>).at
     expect(diffDocuments(branchLineHybrid, after).entries).toEqual([
-      { area: 'parameter', change: 'removed', subject: 'S14.at', before: 'f0' },
-      { area: 'parameter', change: 'added', subject: 'S14.lossDb', after: '0.05' },
+      { area: 'parameter', change: 'removed', subject: 'BR14.at', before: 'f0' },
+      { area: 'parameter', change: 'added', subject: 'BR14.lossDb', after: '0.05' },
     ])
   })
 
@@ -39,14 +39,14 @@ describe('document diff', () => {
     const after = copy()
     after.blocks.push({ id: 'R4', type: 'load', params: { end: 'matched' } })
     after.wires.push(['P4.1', 'R4.1'])
-    after.blocks = after.blocks.filter(b => b.id !== 'S23')
-    after.wires = after.wires.filter(w => !w.some(t => t.startsWith('S23.')))
+    after.blocks = after.blocks.filter(b => b.id !== 'BR23')
+    after.wires = after.wires.filter(w => !w.some(t => t.startsWith('BR23.')))
     const diff = diffDocuments(branchLineHybrid, after)
     expect(diff.entries).toEqual([
+      { area: 'block', change: 'removed', subject: 'BR23', before: 'line' },
       { area: 'block', change: 'added', subject: 'R4', after: 'load' },
-      { area: 'block', change: 'removed', subject: 'S23', before: 'line' },
-      { area: 'wire', change: 'removed', subject: 'P2.1 – S23.1' },
-      { area: 'wire', change: 'removed', subject: 'P3.1 – S23.2' },
+      { area: 'wire', change: 'removed', subject: 'BR23.1 – P2.1' },
+      { area: 'wire', change: 'removed', subject: 'BR23.2 – P3.1' },
       { area: 'wire', change: 'added', subject: 'P4.1 – R4.1' },
     ])
     expect(diff.counts).toEqual({ added: 2, removed: 3, changed: 0 })

@@ -39,14 +39,14 @@ describe('tolerance ranking', { timeout: 120_000 }, () => {
   it('ranks the costliest tolerance first; a spread-free key costs nothing', () => {
     const document = branchLineTuning(false)
     // One arm's length off by up to 8° against the example's small spreads, plus one entry with no spread.
-    document.tolerances = { ...document.tolerances, 'T43.degrees': { absolute: '8 deg' }, 'S14.impedance': { relative: 0 } }
+    document.tolerances = { ...document.tolerances, 'T43.degrees': { absolute: '8 deg' }, 'BR14.impedance': { relative: 0 } }
     const prepared = prepareTuning(document)
     if (!prepared.ok) throw new Error(prepared.problems.map(p => p.message).join('\n'))
     const spreads = resolveTolerances(prepared.setup)
     if (!spreads.ok) throw new Error(spreads.problems.map(p => p.message).join('\n'))
     const ranking = rankTolerances(prepared.setup, spreads.spreads, { seed: 2, trials: 60 })
     expect(ranking).toHaveLength(6)
-    expect(ranking.find(c => c.key === 'S14.impedance')).toMatchObject({ passed: 60, yield: 1 })
+    expect(ranking.find(c => c.key === 'BR14.impedance')).toMatchObject({ passed: 60, yield: 1 })
     for (let i = 1; i < ranking.length; i++) expect(ranking[i]!.yield).toBeGreaterThanOrEqual(ranking[i - 1]!.yield)
     // Something costs yield here, and each entry is the run with that key alone active.
     expect(ranking[0]!.key).toBe('T43.degrees')

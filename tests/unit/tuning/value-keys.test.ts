@@ -32,17 +32,17 @@ describe('values by KEY', () => {
 
   it('reads ranges and absolute tolerances with units in the key\'s unit, and names a wrong unit or an empty range', () => {
     const document = branchLineTuning(false)
-    document.tunables = { 'T12.impedance': { min: '30 ohm', max: 40 }, 'f0': { min: '2.4 GHz', max: '2.5 GHz' }, 'S14.degrees': { min: '3 mm', max: 100 }, 'S23.impedance': { min: 60, max: 40 } }
+    document.tunables = { 'T12.impedance': { min: '30 ohm', max: 40 }, 'f0': { min: '2.4 GHz', max: '2.5 GHz' }, 'BR14.degrees': { min: '3 mm', max: 100 }, 'BR23.impedance': { min: 60, max: 40 } }
     const bad = resolveTunables(setupOf(document))
     expect(bad.ok).toBe(false)
     if (!bad.ok) {
       expect(bad.problems.map(p => p.message)).toEqual([
-        expect.stringMatching(/^tunables\.S14\.degrees\.min: "3 mm" is a length, but an angle/),
-        'tunables.S23.impedance: max (40 Ω) must be above min (60 Ω)',
+        expect.stringMatching(/^tunables\.BR14\.degrees\.min: "3 mm" is a length, but an angle/),
+        'tunables.BR23.impedance: max (40 Ω) must be above min (60 Ω)',
       ])
     }
-    delete document.tunables['S14.degrees']
-    delete document.tunables['S23.impedance']
+    delete document.tunables['BR14.degrees']
+    delete document.tunables['BR23.impedance']
     const good = resolveTunables(setupOf(document))
     expect(good.ok && good.ranges.map(r => [r.target.key, r.min, r.max, r.target.nominal])).toEqual([
       ['T12.impedance', 30, 40, 50 / Math.SQRT2],

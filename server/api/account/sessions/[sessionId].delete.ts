@@ -1,5 +1,5 @@
 import { z } from 'zod'
-import { AccountSession } from '../../../database/models'
+import { AccountSession } from '~~/server/database/models'
 
 /**
  * Ends one session of the signed-in account (a lost laptop, a shared computer). Another account's session answers

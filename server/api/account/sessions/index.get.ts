@@ -1,5 +1,5 @@
-import { describeUserAgent } from '../../../../shared/account/describe-user-agent'
-import type { AccountSessionDto } from '../../../../shared/types/api'
+import { describeUserAgent } from '#shared/account/describe-user-agent'
+import type { AccountSessionDto } from '#shared/types/api'
 
 /** The signed-in account's live sessions, most recently seen first, marking the one this request came with. */
 export default defineEventHandler(async (event): Promise<AccountSessionDto[]> => {

@@ -1,5 +1,5 @@
 import { z } from 'zod'
-import { AccessToken } from '../../../database/models'
+import { AccessToken } from '~~/server/database/models'
 
 /** Revokes one of the signed-in person's tokens at once (the row goes; its next request answers 401). Session only. */
 export default defineEventHandler(async (event) => {

@@ -1,6 +1,6 @@
-import { AccessToken, AccessTokenProject, Membership } from '../../../database/models'
-import { createAccessTokenSchema } from '../../../../shared/schemas/access-token'
-import { ACCESS_TOKENS_PER_USER, type CreatedAccessTokenDto } from '../../../../shared/types/access-token'
+import { AccessToken, AccessTokenProject, Membership } from '~~/server/database/models'
+import { createAccessTokenSchema } from '#shared/schemas/access-token'
+import { ACCESS_TOKENS_PER_USER, type CreatedAccessTokenDto } from '#shared/types/access-token'
 
 /**
  * Creates a personal access token for the signed-in person (session only: a token cannot make tokens). The

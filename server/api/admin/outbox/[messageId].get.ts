@@ -1,6 +1,6 @@
 import { z } from 'zod'
-import { OutboxMessage } from '../../../database/models'
-import type { OutboxMessageDto } from '../../../../shared/types/review'
+import { OutboxMessage } from '~~/server/database/models'
+import type { OutboxMessageDto } from '#shared/types/review'
 
 /** One message of the local outbox with its text and HTML bodies (site administrators). */
 export default defineEventHandler(async (event): Promise<OutboxMessageDto> => {

@@ -1,5 +1,5 @@
-import { OutboxMessage } from '../../../database/models'
-import type { OutboxMessageBriefDto } from '../../../../shared/types/review'
+import { OutboxMessage } from '~~/server/database/models'
+import type { OutboxMessageBriefDto } from '#shared/types/review'
 
 /** Messages the local stand-in SMTP server received, newest first (site administrators). */
 export default defineEventHandler(async (event): Promise<{ local: boolean; messages: OutboxMessageBriefDto[] }> => {

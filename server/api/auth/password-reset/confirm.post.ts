@@ -1,7 +1,7 @@
 import { Op } from 'sequelize'
-import { passwordResetSchema } from '../../../../shared/schemas/auth'
-import { AccountSession, PasswordReset, User } from '../../../database/models'
-import { passwordChangedMail } from '../../../mail/messages'
+import { passwordResetSchema } from '#shared/schemas/auth'
+import { AccountSession, PasswordReset, User } from '~~/server/database/models'
+import { passwordChangedMail } from '~~/server/mail/messages'
 
 /**
  * Sets a new password from a reset link. The link is claimed with one conditional UPDATE (unused, not expired),

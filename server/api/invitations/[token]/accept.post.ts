@@ -1,9 +1,9 @@
 import { z } from 'zod'
 import { Op, col, fn, where } from 'sequelize'
-import { invitationTokenSchema } from '../../../../shared/schemas/review'
-import { Invitation, Membership } from '../../../database/models'
-import type { InvitationAcceptedDto } from '../../../../shared/types/review'
-import { maskEmail } from '../../../../shared/account/mask-email'
+import { invitationTokenSchema } from '#shared/schemas/review'
+import { Invitation, Membership } from '~~/server/database/models'
+import type { InvitationAcceptedDto } from '#shared/types/review'
+import { maskEmail } from '#shared/account/mask-email'
 
 /**
  * Accepts an invitation for the signed-in account, which joins the project with the

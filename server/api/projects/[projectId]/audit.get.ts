@@ -1,7 +1,7 @@
 import { z } from 'zod'
 import { Op } from 'sequelize'
-import { AuditEvent } from '../../../database/models'
-import type { AuditEventDto } from '../../../../shared/types/review'
+import { AuditEvent } from '~~/server/database/models'
+import type { AuditEventDto } from '#shared/types/review'
 
 const auditQuery = z.object({
   before: z.coerce.number().int().positive().optional(),

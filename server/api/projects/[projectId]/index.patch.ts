@@ -1,4 +1,4 @@
-import { updateProjectSchema } from '../../../../shared/schemas/project'
+import { updateProjectSchema } from '#shared/schemas/project'
 
 /** Renames a project or changes its description (owners). */
 export default defineEventHandler(async (event) => {

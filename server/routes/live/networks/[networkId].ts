@@ -5,9 +5,9 @@
  * (server/live/access.ts); the room does the rest (server/live/room.ts).
  */
 import type { Peer } from 'crossws'
-import { admitUpgrade, type LiveAdmission } from '../../../live/access'
-import { useLiveHub } from '../../../live/hub'
-import type { LivePeer } from '../../../live/room'
+import { admitUpgrade, type LiveAdmission } from '~~/server/live/access'
+import { useLiveHub } from '~~/server/live/hub'
+import type { LivePeer } from '~~/server/live/room'
 
 const livePeers = new WeakMap<Peer, LivePeer>()
 /** Unsent bytes past which a peer counts as too slow to keep (4508, a "try again" code: the client reconnects and syncs afresh). */

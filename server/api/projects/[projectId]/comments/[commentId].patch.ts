@@ -1,5 +1,5 @@
-import { updateCommentSchema } from '../../../../../shared/schemas/review'
-import type { CommentDto, UnmatchedMention } from '../../../../../shared/types/review'
+import { updateCommentSchema } from '#shared/schemas/review'
+import type { CommentDto, UnmatchedMention } from '#shared/types/review'
 
 /**
  * Edits a comment's words (its author only) or resolves / reopens a thread (reviewers and

@@ -1,4 +1,4 @@
-import { StoredFile } from '../../../../database/models'
+import { StoredFile } from '~~/server/database/models'
 
 /** Lists the project's data files with what each holds (every member). */
 export default defineEventHandler(async (event) => {

@@ -1,4 +1,4 @@
-import { StoredFile } from '../../../../database/models'
+import { StoredFile } from '~~/server/database/models'
 
 /** Uploads a Touchstone file to the project (owners and editors); it must read as Touchstone. */
 export default defineEventHandler(async (event) => {

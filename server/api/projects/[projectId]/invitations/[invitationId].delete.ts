@@ -1,6 +1,6 @@
 import { z } from 'zod'
-import { Invitation } from '../../../../database/models'
-import type { InvitationDto } from '../../../../../shared/types/review'
+import { Invitation } from '~~/server/database/models'
+import type { InvitationDto } from '#shared/types/review'
 
 /** Withdraws an invitation that has not been used yet (owners); its link stops working. */
 export default defineEventHandler(async (event): Promise<InvitationDto> => {

@@ -1,5 +1,5 @@
-import { Invitation } from '../../../../database/models'
-import type { InvitationDto } from '../../../../../shared/types/review'
+import { Invitation } from '~~/server/database/models'
+import type { InvitationDto } from '#shared/types/review'
 
 /** The project's invitations, newest first, with their status (owners). */
 export default defineEventHandler(async (event): Promise<InvitationDto[]> => {

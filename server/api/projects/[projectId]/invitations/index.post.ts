@@ -1,7 +1,7 @@
-import { inviteSchema } from '../../../../../shared/schemas/review'
-import { Invitation, Membership, User } from '../../../../database/models'
-import { invitationMail } from '../../../../mail/messages'
-import type { InvitationDto } from '../../../../../shared/types/review'
+import { inviteSchema } from '#shared/schemas/review'
+import { Invitation, Membership, User } from '~~/server/database/models'
+import { invitationMail } from '~~/server/mail/messages'
+import type { InvitationDto } from '#shared/types/review'
 
 /**
  * Invites someone by e-mail with a role (owners), whether or not they have an account.

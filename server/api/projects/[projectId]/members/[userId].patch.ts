@@ -1,4 +1,4 @@
-import { changeRoleSchema } from '../../../../../shared/schemas/project'
+import { changeRoleSchema } from '#shared/schemas/project'
 
 /** Changes a member's role (owners); the last owner cannot be demoted. */
 export default defineEventHandler(async (event) => {

@@ -1,4 +1,4 @@
-import { listMembers } from '../../../../utils/members'
+import { listMembers } from '~~/server/utils/members'
 
 /** The project's members and their roles, for any member. */
 export default defineEventHandler(async (event) => {

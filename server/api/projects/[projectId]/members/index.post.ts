@@ -1,6 +1,6 @@
-import { addMemberSchema } from '../../../../../shared/schemas/project'
-import { Membership, User } from '../../../../database/models'
-import { memberAddedMail } from '../../../../mail/messages'
+import { addMemberSchema } from '#shared/schemas/project'
+import { Membership, User } from '~~/server/database/models'
+import { memberAddedMail } from '~~/server/mail/messages'
 
 /** Adds an existing account to the project by e-mail (owners); the new member gets a notice by e-mail. */
 export default defineEventHandler(async (event) => {

@@ -1,5 +1,5 @@
-import { updateNetworkSchema } from '../../../../../shared/schemas/network'
-import { Network } from '../../../../database/models'
+import { updateNetworkSchema } from '#shared/schemas/network'
+import { Network } from '~~/server/database/models'
 
 /**
  * Replaces the document (owners and editors). The caller sends the revision its

@@ -1,4 +1,4 @@
-import { Network } from '../../../../database/models'
+import { Network } from '~~/server/database/models'
 
 /** The project's networks (summaries, no documents), for any member. */
 export default defineEventHandler(async (event) => {

@@ -1,5 +1,5 @@
-import { createNetworkSchema } from '../../../../../shared/schemas/network'
-import { Network } from '../../../../database/models'
+import { createNetworkSchema } from '#shared/schemas/network'
+import { Network } from '~~/server/database/models'
 
 /** Creates a network, empty or from a given document (owners and editors). */
 export default defineEventHandler(async (event) => {

@@ -1,5 +1,5 @@
-import { Network, Review, Snapshot } from '../../../../database/models'
-import type { ProjectReviewDto } from '../../../../../shared/types/review'
+import { Network, Review, Snapshot } from '~~/server/database/models'
+import type { ProjectReviewDto } from '#shared/types/review'
 
 /** The project's reviews, newest first, with their snapshot and network (any member). */
 export default defineEventHandler(async (event): Promise<ProjectReviewDto[]> => {

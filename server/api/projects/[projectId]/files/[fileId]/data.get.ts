@@ -1,4 +1,4 @@
-import type { StoredFileDataDto } from '../../../../../../shared/types/api'
+import type { StoredFileDataDto } from '#shared/types/api'
 
 /** A data file's S-parameters for the editor's solver, read again from the stored bytes (every member). */
 export default defineEventHandler(async (event): Promise<StoredFileDataDto> => {

@@ -1,7 +1,7 @@
-import { decideReviewSchema } from '../../../../../../shared/schemas/review'
-import { Review, ReviewEvent, ReviewReviewer, Snapshot, Network } from '../../../../../database/models'
-import { decisionMail } from '../../../../../mail/messages'
-import type { ReviewDto, ReviewState } from '../../../../../../shared/types/review'
+import { decideReviewSchema } from '#shared/schemas/review'
+import { Review, ReviewEvent, ReviewReviewer, Snapshot, Network } from '~~/server/database/models'
+import { decisionMail } from '~~/server/mail/messages'
+import type { ReviewDto, ReviewState } from '#shared/types/review'
 
 /**
  * A reviewer's decision on a review they were asked for (reviewers and up). One "send

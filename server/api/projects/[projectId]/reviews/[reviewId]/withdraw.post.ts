@@ -1,6 +1,6 @@
-import { withdrawReviewSchema } from '../../../../../../shared/schemas/review'
-import { Review, ReviewEvent } from '../../../../../database/models'
-import type { ReviewDto } from '../../../../../../shared/types/review'
+import { withdrawReviewSchema } from '#shared/schemas/review'
+import { Review, ReviewEvent } from '~~/server/database/models'
+import type { ReviewDto } from '#shared/types/review'
 
 /** Withdraws a review that is still awaiting decisions (owners and editors). */
 export default defineEventHandler(async (event): Promise<ReviewDto> => {

@@ -1,7 +1,7 @@
-import { compareQuerySchema } from '../../../../../../shared/schemas/review'
-import { diffDocuments } from '../../../../../../shared/review/document-diff'
-import { Network, Snapshot } from '../../../../../database/models'
-import type { CompareDto, CompareSideDto } from '../../../../../../shared/types/review'
+import { compareQuerySchema } from '#shared/schemas/review'
+import { diffDocuments } from '#shared/review/document-diff'
+import { Network, Snapshot } from '~~/server/database/models'
+import type { CompareDto, CompareSideDto } from '#shared/types/review'
 
 const when = (date: Date) => date.toISOString().slice(0, 16).replace('T', ' ')
 

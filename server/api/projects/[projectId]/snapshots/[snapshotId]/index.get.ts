@@ -1,4 +1,4 @@
-import type { SnapshotDto } from '../../../../../../shared/types/review'
+import type { SnapshotDto } from '#shared/types/review'
 
 /** One snapshot with its frozen document (any member). */
 export default defineEventHandler(async (event): Promise<SnapshotDto> => {

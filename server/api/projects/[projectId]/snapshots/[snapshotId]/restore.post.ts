@@ -1,7 +1,7 @@
-import { restoreSnapshotSchema } from '../../../../../../shared/schemas/review'
-import { Network, Snapshot } from '../../../../../database/models'
-import type { RestoreResultDto } from '../../../../../../shared/types/review'
-import type { NetworkDocument } from '../../../../../../shared/network/types'
+import { restoreSnapshotSchema } from '#shared/schemas/review'
+import { Network, Snapshot } from '~~/server/database/models'
+import type { RestoreResultDto } from '#shared/types/review'
+import type { NetworkDocument } from '#shared/network/types'
 
 /**
  * Makes a snapshot's document the live network again (owners and editors). Like a save it

@@ -1,4 +1,4 @@
-import type { CheckpointDto } from '../../../../../../../shared/types/history'
+import type { CheckpointDto } from '#shared/types/history'
 
 /** One checkpoint with its document (any member). */
 export default defineEventHandler(async (event): Promise<CheckpointDto> => {

@@ -1,5 +1,5 @@
-import { NetworkCheckpoint } from '../../../../../../database/models'
-import type { CheckpointListItemDto } from '../../../../../../../shared/types/history'
+import { NetworkCheckpoint } from '~~/server/database/models'
+import type { CheckpointListItemDto } from '#shared/types/history'
 
 /** A network's history checkpoints, newest first, without their documents (any member). */
 export default defineEventHandler(async (event): Promise<CheckpointListItemDto[]> => {

@@ -1,4 +1,4 @@
-import type { JobDto } from '../../../../../../../shared/types/jobs'
+import type { JobDto } from '#shared/types/jobs'
 
 /** One run with its progress and, once done, its answer (any member). */
 export default defineEventHandler(async (event): Promise<JobDto> => {

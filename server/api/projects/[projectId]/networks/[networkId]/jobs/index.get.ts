@@ -1,5 +1,5 @@
-import { Job } from '../../../../../../database/models'
-import type { JobDto } from '../../../../../../../shared/types/jobs'
+import { Job } from '~~/server/database/models'
+import type { JobDto } from '#shared/types/jobs'
 
 /** The network's runs on the server, newest first (any member). */
 export default defineEventHandler(async (event): Promise<JobDto[]> => {

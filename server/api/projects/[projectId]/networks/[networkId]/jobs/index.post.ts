@@ -1,7 +1,7 @@
-import { JOB_CHUNK_TRIALS, submitJobSchema } from '../../../../../../../shared/schemas/jobs'
-import { Job, Network } from '../../../../../../database/models'
-import { prepareTuning, resolveTolerances, resolveTunables } from '../../../../../../../shared/tuning/index'
-import type { JobDto, JobParameters } from '../../../../../../../shared/types/jobs'
+import { JOB_CHUNK_TRIALS, submitJobSchema } from '#shared/schemas/jobs'
+import { Job, Network } from '~~/server/database/models'
+import { prepareTuning, resolveTolerances, resolveTunables } from '#shared/tuning/index'
+import type { JobDto, JobParameters } from '#shared/types/jobs'
 
 /** Runs a project may have waiting or running at once; more would let one team crowd out the rest. */
 const MAX_UNFINISHED_PER_PROJECT = 5

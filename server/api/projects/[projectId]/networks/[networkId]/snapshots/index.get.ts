@@ -1,4 +1,4 @@
-import { Snapshot } from '../../../../../../database/models'
+import { Snapshot } from '~~/server/database/models'
 
 /** The network's snapshots, newest first, with author, summary and latest review (any member). */
 export default defineEventHandler(async (event) => {

@@ -1,6 +1,6 @@
-import { createSnapshotSchema } from '../../../../../../../shared/schemas/review'
-import { Network, Snapshot } from '../../../../../../database/models'
-import type { SnapshotDto } from '../../../../../../../shared/types/review'
+import { createSnapshotSchema } from '#shared/schemas/review'
+import { Network, Snapshot } from '~~/server/database/models'
+import type { SnapshotDto } from '#shared/types/review'
 
 /**
  * Freezes the network as saved now (owners and editors): title, note, the full document

@@ -1,5 +1,5 @@
-import { Comment } from '../../../../../../database/models'
-import type { CommentDto } from '../../../../../../../shared/types/review'
+import { Comment } from '~~/server/database/models'
+import type { CommentDto } from '#shared/types/review'
 
 /** Every comment on a snapshot, oldest first; replies carry their thread's `parentId` (any member). */
 export default defineEventHandler(async (event): Promise<CommentDto[]> => {

@@ -1,6 +1,6 @@
-import { createCommentSchema } from '../../../../../../../shared/schemas/review'
-import { Comment } from '../../../../../../database/models'
-import type { CommentAnchor, CommentDto } from '../../../../../../../shared/types/review'
+import { createCommentSchema } from '#shared/schemas/review'
+import { Comment } from '~~/server/database/models'
+import type { CommentAnchor, CommentDto } from '#shared/types/review'
 
 /**
  * Adds a comment or a reply (reviewers and up). A new thread is anchored to the snapshot,

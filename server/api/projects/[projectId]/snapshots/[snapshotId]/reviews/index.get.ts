@@ -1,5 +1,5 @@
-import { Review } from '../../../../../../database/models'
-import type { ReviewDto } from '../../../../../../../shared/types/review'
+import { Review } from '~~/server/database/models'
+import type { ReviewDto } from '#shared/types/review'
 
 /** The snapshot's reviews, newest first, with reviewers, decisions and history (any member). */
 export default defineEventHandler(async (event): Promise<ReviewDto[]> => {

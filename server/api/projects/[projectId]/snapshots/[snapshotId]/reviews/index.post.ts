@@ -1,9 +1,9 @@
-import { requestReviewSchema } from '../../../../../../../shared/schemas/review'
-import { roleAtLeast } from '../../../../../../utils/project-access'
-import { Membership, Review, ReviewEvent, ReviewReviewer } from '../../../../../../database/models'
-import { reviewRequestedMail } from '../../../../../../mail/messages'
-import { summaryLines } from '../../../../../../../shared/review/summary-lines'
-import type { ReviewDto, SnapshotSummary } from '../../../../../../../shared/types/review'
+import { requestReviewSchema } from '#shared/schemas/review'
+import { roleAtLeast } from '~~/server/utils/project-access'
+import { Membership, Review, ReviewEvent, ReviewReviewer } from '~~/server/database/models'
+import { reviewRequestedMail } from '~~/server/mail/messages'
+import { summaryLines } from '#shared/review/summary-lines'
+import type { ReviewDto, SnapshotSummary } from '#shared/types/review'
 
 /**
  * Asks chosen members to review a snapshot (owners and editors). Each must hold the

@@ -1,7 +1,7 @@
-import { restoreCheckpointSchema } from '../../../../../../../../shared/schemas/history'
-import { Network } from '../../../../../../../database/models'
-import type { CheckpointRestoreResultDto } from '../../../../../../../../shared/types/history'
-import type { NetworkDocument } from '../../../../../../../../shared/network/types'
+import { restoreCheckpointSchema } from '#shared/schemas/history'
+import { Network } from '~~/server/database/models'
+import type { CheckpointRestoreResultDto } from '#shared/types/history'
+import type { NetworkDocument } from '#shared/network/types'
 
 /**
  * Makes a checkpoint's document the live network again, as a new change (owners and editors).

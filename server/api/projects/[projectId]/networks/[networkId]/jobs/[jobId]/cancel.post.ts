@@ -1,5 +1,5 @@
-import { Job } from '../../../../../../../database/models'
-import type { JobDto } from '../../../../../../../../shared/types/jobs'
+import { Job } from '~~/server/database/models'
+import type { JobDto } from '#shared/types/jobs'
 
 /** Stops a waiting or running run (owners and editors); workers drop its remaining chunks. A finished run is left as it is. */
 export default defineEventHandler(async (event): Promise<JobDto> => {
