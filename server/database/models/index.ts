@@ -19,6 +19,7 @@ import { PasswordReset } from './PasswordReset'
 import { AccessToken } from './AccessToken'
 import { AccessTokenProject } from './AccessTokenProject'
 import { NetworkCheckpoint } from './NetworkCheckpoint'
+import { ProjectSubstrate } from './ProjectSubstrate'
 
 export { User, Project, Membership, Network, Snapshot, Comment, StoredFile, AuditEvent }
 export { Invitation, Review, ReviewReviewer, ReviewEvent, OutboxMessage }
@@ -26,6 +27,7 @@ export { NetworkLiveState, NetworkUpdate }
 export { AccountSession, PasswordReset }
 export { AccessToken, AccessTokenProject }
 export { NetworkCheckpoint }
+export { ProjectSubstrate }
 
 /** Binds every model to one Sequelize instance. */
 export function setupModels(sequelize: Sequelize): void {
@@ -37,4 +39,5 @@ export function setupModels(sequelize: Sequelize): void {
   for (const model of [AccountSession, PasswordReset]) model.setup(sequelize)
   for (const model of [AccessToken, AccessTokenProject]) model.setup(sequelize)
   NetworkCheckpoint.setup(sequelize)
+  ProjectSubstrate.setup(sequelize)
 }
