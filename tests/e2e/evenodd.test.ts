@@ -44,12 +44,13 @@ describe('even/odd view', () => {
   })
   afterAll(async () => { await close?.() })
 
-  it('shows the demo branch-line\'s half circuits, Pozar\'s values at f0, and a check row that says equal', async () => {
+  it('shows the demo branch-line\'s half circuits (built from lines), Pozar\'s values at f0, and a check row that says equal', async () => {
     const networks = await api<Array<{ id: string, name: string }>>(`/api/projects/${projectId}/networks`)
     const demo = networks.find(n => n.name.startsWith('Quadrature split, 2.45 GHz'))!
     await openNetwork(demo.id)
     await expect.poll(() => page.textContent('[data-testid="evenodd-check"]')).toContain('equal the full solve')
-    expect(await page.textContent('[data-testid="evenodd-pairs-source"]')).toContain('HYB')
+    expect(await page.textContent('[data-testid="evenodd-pairs-source"]')).toContain('found')
+    expect(await page.inputValue('[data-testid="evenodd-pairs"]')).toBe('[[1,4],[2,3]]')
     expect(await page.$('[data-testid="evenodd-drawing-even"] circle')).not.toBeNull()
     expect(await page.$('[data-testid="evenodd-drawing-odd"] circle')).toBeNull()
     // Move to f0 (the demo's sweep may not be centred on it): step the slider until it reads 2.450 GHz.
@@ -65,6 +66,26 @@ describe('even/odd view', () => {
     expect(await page.textContent('[data-testid="evenodd-mode-To"]')).toContain('0.707 − 0.707j')
     expect(await page.textContent('[data-testid="evenodd-combine-S21"]')).toContain('0.000 − 0.707j')
     await screenshot(page, 'evenodd-branch-line')
+  })
+
+  it('gives the branch model\'s half circuits in closed form, drawn with their stubs, equal to the full solve', async () => {
+    const document = {
+      format: 'portwright.network', version: 1, name: 'Branch model', referenceImpedance: 50, variables: { f0: '2.45 GHz' },
+      sweep: { start: '1.45 GHz', stop: '3.45 GHz', points: 201, spacing: 'linear' },
+      blocks: [
+        ...[1, 2, 3, 4].map(n => ({ id: `P${n}`, type: 'port', params: { index: n }, layout: { x: n % 2 ? 0 : 360, y: n > 2 ? 200 : 0 } })),
+        { id: 'HYB', type: 'hybrid90', params: { model: 'branch', at: 'f0' }, layout: { x: 160, y: 80 } },
+      ],
+      wires: [['P1.1', 'HYB.1'], ['P2.1', 'HYB.2'], ['P3.1', 'HYB.3'], ['P4.1', 'HYB.4']],
+    }
+    const created = await api<{ id: string }>(`/api/projects/${projectId}/networks`, { method: 'POST', body: { name: `Branch modes ${Date.now()}`, document } })
+    await openNetwork(created.id)
+    await expect.poll(() => page.textContent('[data-testid="evenodd-check"]')).toContain('equal the full solve')
+    expect(await page.textContent('[data-testid="evenodd-pairs-source"]')).toContain('HYB (branch-line model)')
+    expect(await page.textContent('[data-testid="evenodd-abcd"]')).toContain('closed form')
+    // The stubs are labelled with their impedance and length: Z0 and 45° (λ/8) for the equal split.
+    expect(await page.textContent('[data-testid="evenodd-drawing-odd"]')).toContain('50.00 Ω, 45°')
+    await screenshot(page, 'evenodd-branch-model')
   })
 
   it('saves marked mirror pairs in the document and says when the network is not mirrored about them', async () => {

@@ -40,6 +40,9 @@ describe('even/odd decomposition', () => {
   it('recombines the branch-line example of lines to its full S within 1e-12 at every frequency (pairs 1↔4, 2↔3)', () => {
     const r = solve(branchLine)
     expect(worstAcrossSweep(r, [[1, 4], [2, 3]])).toBeLessThan(1e-12)
+    // derived by hand: a square branch-line is also mirrored 1↔2, 4↔3 and symmetric under the half turn 1↔3, 2↔4;
+    // the usual plane comes first.
+    expect(bestPairing(r).pairs).toEqual([[1, 4], [2, 3]])
   })
 
   it('tells a broken symmetry: a branch-line with arm 1–2 at 40 Ω is no longer mirrored 1↔4, 2↔3, still 1↔2, 4↔3 (derived by hand)', () => {
