@@ -11,7 +11,7 @@ export function branchLineCentre(document: NetworkDocument, f0: number, span = 0
   const solved = solveDocument({ ...document, sweep: { start, stop, points, spacing: 'linear' } })
   if (!solved.ok) throw new Error(solved.problems.map(p => p.message).join('; '))
   const { re, im, frequencies } = solved.result
-  const cost = (k: number) => re[k * 16] ** 2 + im[k * 16] ** 2 + re[k * 16 + 12] ** 2 + im[k * 16 + 12] ** 2
+  const cost = (k: number) => re[k * 16]! ** 2 + im[k * 16]! ** 2 + re[k * 16 + 12]! ** 2 + im[k * 16 + 12]! ** 2
   let best = 1
   for (let k = 1; k < points - 1; k++) if (cost(k) < cost(best)) best = k
   const a = cost(best - 1), b = cost(best), c = cost(best + 1)
