@@ -3,13 +3,14 @@
  * Prints a version-1.1 network document of line-level blocks with a sweep around the centre
  * frequency and a spec. Bad input exits with status 2, one line per problem naming the option.
  */
-import { DESIGN_ASSISTANTS, DESIGN_KINDS, isDesignKind, runDesign } from '../shared/design/index'
+import { DESIGN_ASSISTANTS, DESIGN_KINDS, isDesignKind, isSubstrateOption, runDesign, SUBSTRATE_OPTIONS } from '../shared/design/index'
 import { fail } from './network-cli'
 
 function usage(): string {
   return [
     'usage: npm run -s design -- KIND [--OPTION VALUE …]',
-    ...DESIGN_KINDS.map(kind => `  ${kind} ${DESIGN_ASSISTANTS[kind].options.map(o => (o.required ? `--${o.name} V` : `[--${o.name} V]`)).join(' ')}`),
+    ...DESIGN_KINDS.map(kind => `  ${kind} ${DESIGN_ASSISTANTS[kind].options.filter(o => !isSubstrateOption(o.name)).map(o => (o.required ? `--${o.name} V` : `[--${o.name} V]`)).join(' ')}`),
+    `  in microstrip (all but coupled-line): ${SUBSTRATE_OPTIONS.map(o => `[--${o.name} V]`).join(' ')}`,
   ].join('\n')
 }
 

@@ -25,7 +25,7 @@ import {
 
 /** A frequency marker on the plots. */
 export interface Marker { id: number, frequency: number }
-export type ResultsView = 'response' | 'smith' | 'balance' | 'table' | 'spec' | 'array'
+export type ResultsView = 'response' | 'smith' | 'balance' | 'table' | 'spec' | 'array' | 'evenodd'
 
 /** How the results dock is set up: view state, not part of the document and not undoable. */
 export interface ResultsSettings {

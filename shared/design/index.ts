@@ -8,3 +8,7 @@ export { binomialBandwidth, binomialSections, chebyshev, chebyshevBandwidth, che
 export { branchLineSections, matchedWidth } from './branch-line-sections'
 export { DESIGN_ASSISTANTS, DESIGN_KINDS, isDesignKind, runDesign, type DesignOption, type OptionProblem } from './options'
 export type { CoupledLineAsk, DesignKind, DividerAsk, QuadratureAsk, RingAsk, TransformerAsk } from './types'
+export { SUBSTRATE_OPTIONS, isSubstrateOption } from './options'
+export { inMicrostrip, stripFor, substrateEntry, DESIGN_SUBSTRATE, type StripSize } from './microstrip-medium'
+export { branchLineCentre } from './branch-line-centre'
+export { branchLineJunctionStudy, type JunctionStudy } from './junction-study'

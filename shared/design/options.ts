@@ -8,6 +8,7 @@ import { designRing } from './ring'
 import { chebyshevSecant } from './transformer-sections'
 import { designTransformer, DEFAULT_MAX_REFLECTION } from './transformer'
 import type { DesignKind } from './types'
+import { inMicrostrip } from './microstrip-medium'
 
 /** One option of an assistant, as the command line spells it (without the leading --). */
 export interface DesignOption {
@@ -48,6 +49,25 @@ interface Assistant {
 const frequency: DesignOption = { name: 'frequency', label: 'Centre frequency', kind: 'frequency', required: true, above: 0, max: 1e12 }
 const impedance: DesignOption = { name: 'impedance', label: 'System impedance Z0', kind: 'impedance', required: true, above: 0, max: 1e4 }
 
+/**
+ * Options of our own that place the design in microstrip on a substrate instead of ideal lines:
+ * permittivity and height together choose microstrip; the rest default to a zero-thickness,
+ * lossless, smooth strip. Not for `coupled-line` (no coupled microstrip model yet).
+ */
+export const SUBSTRATE_OPTIONS: readonly DesignOption[] = [
+  { name: 'substrate-permittivity', label: 'Microstrip: relative permittivity εr (empty: ideal lines)', kind: 'ratio', required: false, min: 1, max: 128 },
+  { name: 'substrate-height', label: 'Microstrip: substrate height', kind: 'length', required: false, above: 0, max: 0.1 },
+  { name: 'substrate-thickness', label: 'Microstrip: strip thickness', kind: 'length', required: false, min: 0, max: 0.01, placeholder: '0' },
+  { name: 'substrate-loss-tangent', label: 'Microstrip: loss tangent', kind: 'ratio', required: false, min: 0, max: 1, placeholder: '0' },
+  { name: 'substrate-conductivity', label: 'Microstrip: conductivity (S/m; empty: lossless)', kind: 'conductivity', required: false, above: 0, max: 1e9 },
+]
+const SUBSTRATE_NAMES = new Set(SUBSTRATE_OPTIONS.map(o => o.name))
+
+/** Whether an option places the design on a substrate (the dialog groups these). */
+export function isSubstrateOption(name: string): boolean {
+  return SUBSTRATE_NAMES.has(name)
+}
+
 /** Every assistant by KIND, with its options: the one table the command and the dialog read. */
 export const DESIGN_ASSISTANTS: Readonly<Record<DesignKind, Assistant>> = {
   'quadrature': {
@@ -57,6 +77,7 @@ export const DESIGN_ASSISTANTS: Readonly<Record<DesignKind, Assistant>> = {
       frequency, impedance,
       { name: 'coupling-db', label: 'Coupling to port 3', kind: 'decibel', required: false, min: 1, max: 15, placeholder: '3.0103' },
       { name: 'sections', label: 'Sections', kind: 'choice', required: false, choices: ['1', '2', '3'], placeholder: '1' },
+      ...SUBSTRATE_OPTIONS,
     ],
     check(v) {
       // Two sections at 10 dB already need outer branches of 6.2·Z0; weaker coupling only gets worse.
@@ -70,13 +91,13 @@ export const DESIGN_ASSISTANTS: Readonly<Record<DesignKind, Assistant>> = {
   'ring': {
     kind: 'ring',
     summary: '180° ring hybrid: 1 sum, 2 and 3 outputs, 4 difference',
-    options: [frequency, impedance],
+    options: [frequency, impedance, ...SUBSTRATE_OPTIONS],
     design: v => designRing({ frequency: v.frequency as number, impedance: v.impedance as number }),
   },
   'divider': {
     kind: 'divider',
     summary: 'In-phase divider with isolation resistor: 1 in, 2 and 3 out',
-    options: [frequency, impedance, { name: 'ratio-db', label: 'Power at 2 over 3', kind: 'decibel', required: false, min: -10, max: 10, placeholder: '0' }],
+    options: [frequency, impedance, { name: 'ratio-db', label: 'Power at 2 over 3', kind: 'decibel', required: false, min: -10, max: 10, placeholder: '0' }, ...SUBSTRATE_OPTIONS],
     design: v => designDivider({ frequency: v.frequency as number, impedance: v.impedance as number, ratioDb: v['ratio-db'] as number | undefined }),
   },
   'transformer': {
@@ -88,6 +109,7 @@ export const DESIGN_ASSISTANTS: Readonly<Record<DesignKind, Assistant>> = {
       { name: 'sections', label: 'Sections', kind: 'count', required: true, min: 1, max: 8, integer: true },
       { name: 'response', label: 'Response', kind: 'choice', required: true, choices: ['binomial', 'chebyshev'] },
       { name: 'max-reflection', label: 'Largest reflection |Γ|', kind: 'ratio', required: false, above: 0, max: 0.5, placeholder: String(DEFAULT_MAX_REFLECTION) },
+      ...SUBSTRATE_OPTIONS,
     ],
     check(v) {
       const problems: OptionProblem[] = []
@@ -160,6 +182,24 @@ export function runDesign(kind: DesignKind, given: Record<string, string>): { ok
     else problems.push({ option: option.name, message: read.message })
   }
   if (!problems.length && assistant.check) problems.push(...assistant.check(values))
+  const hasPermittivity = values['substrate-permittivity'] !== undefined, hasHeight = values['substrate-height'] !== undefined
+  const substrateGiven = [...SUBSTRATE_NAMES].some(n => values[n] !== undefined)
+  if (substrateGiven && !hasPermittivity && given['substrate-permittivity'] === undefined) problems.push({ option: 'substrate-permittivity', message: 'is required for a design in microstrip (with --substrate-height)' })
+  if (substrateGiven && !hasHeight && given['substrate-height'] === undefined) problems.push({ option: 'substrate-height', message: 'is required for a design in microstrip (with --substrate-permittivity)' })
   if (problems.length) return { ok: false, problems }
-  return { ok: true, document: assistant.design(values) }
+  const ideal = assistant.design(values)
+  if (!hasPermittivity || !hasHeight) return { ok: true, document: ideal }
+  const substrate = {
+    permittivity: values['substrate-permittivity'] as number,
+    height: values['substrate-height'] as number,
+    thickness: (values['substrate-thickness'] as number | undefined) ?? 0,
+    lossTangent: (values['substrate-loss-tangent'] as number | undefined) ?? 0,
+    conductivity: values['substrate-conductivity'] as number | undefined,
+    roughness: 0,
+  }
+  try {
+    return { ok: true, document: inMicrostrip(ideal, substrate, values.frequency as number) }
+  } catch (error) {
+    return { ok: false, problems: [{ option: 'substrate-permittivity', message: `this board cannot carry the design: ${(error as Error).message}` }] }
+  }
 }

@@ -204,6 +204,19 @@ const policy: Record<string, RouteCase> = {
   },
   'GET /api/projects/:projectId/networks/:networkId/jobs/:jobId': { rule: 'viewer', prepare: async f => ({ path: `${await jobsNetwork(f)}/jobs/${await ownerJob(f)}` }) },
   'POST /api/projects/:projectId/networks/:networkId/jobs/:jobId/cancel': { rule: 'editor', prepare: async f => ({ path: `${await jobsNetwork(f)}/jobs/${await ownerJob(f)}/cancel` }) },
+  'GET /api/projects/:projectId/substrates': { rule: 'viewer', prepare: async f => ({ path: `/api/projects/${f.projectId}/substrates` }) },
+  'POST /api/projects/:projectId/substrates': {
+    rule: 'editor',
+    prepare: async f => ({ path: `/api/projects/${f.projectId}/substrates`, body: { name: `Matrix board ${crypto.randomUUID().slice(0, 8)}`, permittivity: 3.5, height: 5.08e-4 } }),
+  },
+  'PATCH /api/projects/:projectId/substrates/:substrateId': {
+    rule: 'editor',
+    prepare: async f => ({ path: `/api/projects/${f.projectId}/substrates/${await librarySubstrate(f)}`, body: { note: 'changed by the matrix' } }),
+  },
+  'DELETE /api/projects/:projectId/substrates/:substrateId': {
+    rule: 'editor',
+    prepare: async f => ({ path: `/api/projects/${f.projectId}/substrates/${await librarySubstrate(f)}` }),
+  },
   'DELETE /api/projects/:projectId/networks/:networkId': {
     rule: 'editor',
     prepare: async (f) => {
@@ -228,6 +241,11 @@ const TOUCHSTONE_ONE_PORT = '! Quillmere matrix load\n# GHZ S RI R 50\n1 -0.3333
 async function uploadedFile(f: Fixture): Promise<string> {
   const answer = await f.owner.request('POST', `/api/projects/${f.projectId}/files`, fileForm(`fixture-${crypto.randomUUID().slice(0, 8)}.s1p`, TOUCHSTONE_ONE_PORT))
   return answer.body.id
+}
+
+/** A fresh board in the matrix project's substrate library (each call its own). */
+async function librarySubstrate(f: Fixture): Promise<string> {
+  return (await f.owner.post(`/api/projects/${f.projectId}/substrates`, { name: `Fixture board ${crypto.randomUUID().slice(0, 8)}`, permittivity: 2.2, height: 1.27e-3 })).body.id
 }
 
 /** A second project with the same members, for calls that delete a project. */

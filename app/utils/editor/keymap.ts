@@ -9,7 +9,7 @@ export type EditorAction =
   | 'nudgeLeft' | 'nudgeRight' | 'nudgeUp' | 'nudgeDown' | 'jumpLeft' | 'jumpRight' | 'jumpUp' | 'jumpDown'
   | 'zoomIn' | 'zoomOut' | 'fit' | 'tidy' | 'focusRail' | 'focusWires' | 'settings' | 'save'
   | 'addMarker' | 'removeMarker' | 'markerLeft' | 'markerRight' | 'markerJumpLeft' | 'markerJumpRight'
-  | 'viewResponse' | 'viewSmith' | 'viewBalance' | 'viewTable' | 'viewSpec' | 'viewArray'
+  | 'viewResponse' | 'viewSmith' | 'viewBalance' | 'viewTable' | 'viewSpec' | 'viewArray' | 'viewEvenOdd'
 
 export interface KeyBinding {
   /** Normalised combos, e.g. "mod+z", "shift+t", "arrowleft". */
@@ -66,6 +66,7 @@ export const keymap: readonly KeyBinding[] = [
   { combos: ['alt+4'], label: 'Alt 4', action: 'viewTable', description: 'Results: Table', group: 'Results' },
   { combos: ['alt+5'], label: 'Alt 5', action: 'viewSpec', description: 'Results: Spec', group: 'Results' },
   { combos: ['alt+6'], label: 'Alt 6', action: 'viewArray', description: 'Results: Array (beams)', group: 'Results' },
+  { combos: ['alt+7'], label: 'Alt 7', action: 'viewEvenOdd', description: 'Results: Even/odd modes', group: 'Results' },
 ]
 
 /** The normalised combo of a key event: "mod+" for Ctrl or ⌘, then "alt+", "shift+", then the key (digits by their key code, so Alt+1 works everywhere). */

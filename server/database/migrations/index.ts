@@ -7,6 +7,7 @@ import * as m0005 from './0005-sessions-password-resets'
 import * as m0006 from './0006-network-checkpoints'
 import * as m0007 from './0007-file-versions'
 import * as m0008 from './0008-access-tokens'
+import * as m0009 from './0009-substrate-library'
 import * as m0010 from './0010-jobs'
 
 export interface MigrationStep {
@@ -25,5 +26,6 @@ export const migrations: MigrationStep[] = [
   { name: '0006-network-checkpoints', ...m0006 },
   { name: '0007-file-versions', ...m0007 },
   { name: '0008-access-tokens', ...m0008 },
+  { name: '0009-substrate-library', ...m0009 },
   { name: '0010-jobs', ...m0010 },
 ]

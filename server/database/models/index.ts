@@ -21,6 +21,7 @@ import { AccessTokenProject } from './AccessTokenProject'
 import { NetworkCheckpoint } from './NetworkCheckpoint'
 import { Job } from './Job'
 import { JobChunk } from './JobChunk'
+import { ProjectSubstrate } from './ProjectSubstrate'
 
 export { User, Project, Membership, Network, Snapshot, Comment, StoredFile, AuditEvent }
 export { Invitation, Review, ReviewReviewer, ReviewEvent, OutboxMessage }
@@ -29,6 +30,7 @@ export { AccountSession, PasswordReset }
 export { AccessToken, AccessTokenProject }
 export { NetworkCheckpoint }
 export { Job, JobChunk }
+export { ProjectSubstrate }
 
 /** Binds every model to one Sequelize instance. */
 export function setupModels(sequelize: Sequelize): void {
@@ -41,4 +43,5 @@ export function setupModels(sequelize: Sequelize): void {
   for (const model of [AccessToken, AccessTokenProject]) model.setup(sequelize)
   NetworkCheckpoint.setup(sequelize)
   for (const model of [Job, JobChunk]) model.setup(sequelize)
+  ProjectSubstrate.setup(sequelize)
 }

@@ -1,7 +1,8 @@
 import type { Sequelize } from 'sequelize'
-import { Membership, Network, Project, User } from '../models'
+import { Membership, Network, Project, ProjectSubstrate, User } from '../models'
 import { DEMO_PASSWORD, demoPeople, demoProjects, type DemoPersonKey } from './demo-scenario'
 import { demoNetworks } from './demo-networks'
+import { demoSubstrates } from './demo-substrates'
 
 /** Writes the demo scenario in one transaction. */
 export async function seedDemo(sequelize: Sequelize, hash: (password: string) => Promise<string>): Promise<void> {
@@ -20,6 +21,9 @@ export async function seedDemo(sequelize: Sequelize, hash: (password: string) =>
       }
       for (const document of demoNetworks[spec.key]) {
         await Network.create({ projectId: project.id, name: document.name ?? 'Untitled network', document, updatedBy: ids[owner] }, { transaction })
+      }
+      for (const board of demoSubstrates[spec.key]) {
+        await ProjectSubstrate.create({ ...board, projectId: project.id, updatedBy: ids[owner] }, { transaction })
       }
     }
   })

@@ -37,6 +37,20 @@ describe('design command', { timeout: 240_000 }, () => {
     expect(JSON.parse(runs[4]!.stdout).blocks.map((b: { type: string }) => b.type)).toContain('coupled')
   })
 
+  it('places the design in microstrip with the substrate options of our own', async () => {
+    const run = await design(['quadrature', '--frequency', '2.45 GHz', '--impedance', '50', '--substrate-permittivity', '3.5', '--substrate-height', '0.508 mm', '--substrate-thickness', '35 um'])
+    expect(run.stderr).toBe('')
+    expect(run.status).toBe(0)
+    const document = JSON.parse(run.stdout)
+    expect(parseNetworkDocument(document).ok).toBe(true)
+    expect(document.substrates).toEqual({ board: { permittivity: 3.5, height: '0.508 mm', thickness: '35 um' } })
+    expect(document.blocks.filter((b: { type: string }) => b.type === 'microstrip')).toHaveLength(4)
+    const half = await design(['ring', '--frequency', '2.45 GHz', '--impedance', '50', '--substrate-height', '1 mm'])
+    expect(half.status).toBe(2)
+    expect(half.stdout).toBe('')
+    expect(half.stderr).toContain('--substrate-permittivity: is required for a design in microstrip')
+  })
+
   it('bad input: exit 2, one line per problem naming the option, nothing on standard output', async () => {
     const [bad, unknown, missing] = await Promise.all([
       design(['transformer', '--frequency', '1 GHz', '--impedance', '50 m', '--load', '100', '--sections', '2.5', '--response', 'flat']),
