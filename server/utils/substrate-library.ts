@@ -1,7 +1,7 @@
 import type { H3Event } from 'h3'
 import { z } from 'zod'
-import { ProjectSubstrate } from '../database/models'
-import type { LibrarySubstrateDto } from '../../shared/schemas/substrate-library'
+import { ProjectSubstrate } from '~~/server/database/models'
+import type { LibrarySubstrateDto } from '#shared/schemas/substrate-library'
 
 /** A library board as a plain DTO. */
 export function toLibrarySubstrateDto(s: ProjectSubstrate): LibrarySubstrateDto {

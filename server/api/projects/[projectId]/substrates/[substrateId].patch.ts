@@ -1,4 +1,4 @@
-import { updateLibrarySubstrateSchema } from '../../../../../shared/schemas/substrate-library'
+import { updateLibrarySubstrateSchema } from '#shared/schemas/substrate-library'
 
 /** Changes a board of the project's substrate library (owners and editors). */
 export default defineEventHandler(async (event) => {

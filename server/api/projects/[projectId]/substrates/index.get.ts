@@ -1,4 +1,4 @@
-import { ProjectSubstrate } from '../../../../database/models'
+import { ProjectSubstrate } from '~~/server/database/models'
 
 /** The project's substrate library, by name (every member). */
 export default defineEventHandler(async (event) => {

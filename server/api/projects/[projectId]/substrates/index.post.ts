@@ -1,5 +1,5 @@
-import { createLibrarySubstrateSchema, SUBSTRATE_LIBRARY_LIMIT } from '../../../../../shared/schemas/substrate-library'
-import { ProjectSubstrate } from '../../../../database/models'
+import { createLibrarySubstrateSchema, SUBSTRATE_LIBRARY_LIMIT } from '#shared/schemas/substrate-library'
+import { ProjectSubstrate } from '~~/server/database/models'
 
 /** Adds a board to the project's substrate library (owners and editors). */
 export default defineEventHandler(async (event) => {
