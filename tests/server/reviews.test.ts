@@ -54,6 +54,22 @@ describe('snapshots', () => {
     expect(list.body[0]).not.toHaveProperty('document')
   })
 
+  it('freeze the document\'s spec (contract 1.1) and report the band it meets', async () => {
+    // The one-section branch-line meets 20 dB return loss over roughly ±5 % of f0 (common practice); the spec's
+    // own band is narrower, so the summary must find a band that contains it.
+    await saveDocument(editor.client, (d) => {
+      d.version = 1.1
+      d.spec = { center: 'f0', band: { start: '2.4 GHz', stop: '2.5 GHz' }, conditions: [{ measure: 'returnLoss', port: 1, min: 20 }] }
+    })
+    const made = await snapshot('With its spec')
+    expect(made.document.spec.center).toBe('f0')
+    expect(made.summary.centre).toEqual({ frequency: 2.45e9, from: 'spec' })
+    expect(made.summary.bandwidth.ok).toBe(true)
+    expect(made.summary.bandwidth.low).toBeLessThan(2.4e9)
+    expect(made.summary.bandwidth.high).toBeGreaterThan(2.5e9)
+    await saveDocument(editor.client, (d) => { delete d.spec; d.version = 1 })
+  })
+
   it('stay as frozen when the network changes afterwards', async () => {
     const made = await snapshot('Before the change')
     await saveDocument(editor.client, (d) => { d.blocks.find(b => b.id === 'T12')!.params.impedance = 36 })
