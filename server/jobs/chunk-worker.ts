@@ -76,6 +76,7 @@ export async function startChunkWorker(databaseUrl: string, log: (line: string) 
       Job.findByPk(jobId, { attributes: ['state'] }).then((j) => { if (!j || !active.has(j.state)) stop.abort(new Error('cancelled')) }).catch(() => {})
     }, 1000)
     let outcome: ChunkOutcome
+    log(`[worker ${process.pid}] job ${jobId} chunk ${chunkIndex + 1}/${job.chunkCount}: started`)
     try {
       const task: ChunkTask = { parameters: job.parameters, document: job.document, networks: [...byRef], chunkIndex }
       outcome = await pool.run(task, { signal: stop.signal }) as ChunkOutcome

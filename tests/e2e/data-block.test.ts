@@ -44,6 +44,8 @@ const loop = (other: string) => ({ ...twoPorts, blocks: [...twoPorts.blocks, { i
 
 /** The results table's columns by heading, at the row of this frequency text. */
 async function tableRow(frequency: string): Promise<Record<string, number>> {
+  // Views other than Response load on first use: wait for the table's rows before reading them.
+  await page.waitForSelector('[data-testid="results-table"] tbody tr')
   const header = await page.$$eval('[data-testid="results-table"] thead th', ths => ths.map(th => th.textContent?.trim() ?? ''))
   const rows = await page.$$eval('[data-testid="results-table"] tbody tr', trs => trs.map(tr => [...tr.querySelectorAll('td')].map(td => td.textContent?.trim() ?? '')))
   const row = rows.find(r => r[0] === frequency)

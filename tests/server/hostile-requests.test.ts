@@ -91,15 +91,18 @@ describe('hostile requests', () => {
     expect(many.body.message).toMatch(/at most 2,000 blocks/)
   })
 
-  it('attack: an allowed but heavy solve (a subnetwork used 135 times, each of 135 lines, 2,001 points) is stopped at the budget', async () => {
+  it('attack: an allowed but heavy solve (a subnetwork used 135 times, each of 135 different microstrip lines, 2,001 points) is stopped at the budget', async () => {
     const inner = `Heavy inner ${crypto.randomUUID()}`
+    // Microstrip lines of different widths: no two share a fill, and each fill runs the dispersion and loss models.
+    const strip = (i: number) => ({ type: 'microstrip', params: { substrate: 'core', width: `${1 + i / 1000} mm`, length: '10 mm' } })
     const chain = (next: string | null) => {
       const ids = Array.from({ length: 135 }, (_, i) => `B${i}`)
       return {
         format: 'portwright.network', version: 1, name: 'Heavy', referenceImpedance: 50,
         sweep: { start: 1e9, stop: 2e9, points: 20_001 },
+        substrates: { core: { permittivity: 3.5, height: '0.508 mm', thickness: '35 um', lossTangent: 0.003, conductivity: 5.8e7 } },
         blocks: [{ id: 'P1', type: 'port', params: { index: 1 } }, { id: 'P2', type: 'port', params: { index: 2 } },
-          ...ids.map(id => (next ? { id, type: 'subnetwork', params: { network: next } } : { id, type: 'line', params: { impedance: 50, degrees: 90, at: 1e9 } }))],
+          ...ids.map((id, i) => (next ? { id, type: 'subnetwork', params: { network: next } } : { id, ...strip(i) }))],
         wires: [['P1.1', 'B0.1'], ...ids.slice(1).map((id, i) => [`B${i}.2`, `${id}.1`]), ['B134.2', 'P2.1']],
       }
     }

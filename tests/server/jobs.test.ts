@@ -48,11 +48,11 @@ function killGroup(worker: Worker, signal: NodeJS.Signals): void {
   try { process.kill(-worker.child.pid!, signal) } catch { /* already gone */ }
 }
 
-async function until(check: () => boolean | Promise<boolean>, timeoutMs: number, what: () => string): Promise<void> {
+async function until(check: () => boolean | Promise<boolean>, timeoutMs: number, what: () => string, everyMs = 250): Promise<void> {
   const end = Date.now() + timeoutMs
   while (!(await check())) {
     if (Date.now() > end) throw new Error(what())
-    await new Promise(r => setTimeout(r, 250))
+    await new Promise(r => setTimeout(r, everyMs))
   }
 }
 
@@ -107,9 +107,15 @@ describe('the job queue', () => {
     expect(sent.body).toMatchObject({ state: 'queued', progressDone: 0, progressTotal: trials })
     const jobId = sent.body.id as string
     const [victim] = workers
-    // The victim has finished one chunk and gone on to the next when it is killed.
-    await until(() => /chunk \d+\/6/.test(victim!.output()), 120_000, () => `no chunk finished by the first worker:\n${victim!.output()}`)
-    await new Promise(r => setTimeout(r, 1500))
+    // The victim has finished one chunk and is in the middle of another when it is killed.
+    const counts = () => {
+      const out = victim!.output()
+      return { started: (out.match(/chunk \d+\/6: started/g) ?? []).length, finished: (out.match(/chunk \d+\/6: \d+ trials/g) ?? []).length }
+    }
+    await until(() => {
+      const { started, finished } = counts()
+      return finished >= 1 && started > finished
+    }, 120_000, () => `the first worker never was in the middle of a second chunk:\n${victim!.output()}`, 20)
     killGroup(victim!, 'SIGKILL')
     const seen: number[] = []
     await until(async () => {
@@ -183,6 +189,6 @@ describe('the job queue', () => {
     const result = done.result as Extract<JobDto['result'], { kind: 'optimize' }>
     expect(result.evaluations).toBeGreaterThan(0)
     expect(result.evaluations).toBeLessThanOrEqual(300)
-    expect(result.values.map(v => v.key).sort()).toEqual(['S14.impedance', 'S23.impedance', 'T12.impedance', 'T43.impedance'])
+    expect(result.values.map(v => v.key).sort()).toEqual(['BR14.impedance', 'BR23.impedance', 'T12.impedance', 'T43.impedance'])
   }, 150_000)
 })
