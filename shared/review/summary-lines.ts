@@ -20,7 +20,7 @@ export function summaryLines(summary: SnapshotSummary): string[] {
   if (!summary.solved) return [`Not solved: ${summary.problem ?? 'unknown problem'}.`]
   const lines: string[] = []
   if (summary.centre) {
-    const from = { spec: 'the spec mask', f0: 'the variable f0', sweep: 'the middle of the sweep' }[summary.centre.from]
+    const from = { spec: 'the spec', f0: 'the variable f0', sweep: 'the middle of the sweep' }[summary.centre.from]
     lines.push(`At ${formatHz(summary.centre.frequency)} (centre from ${from}), ${summary.ports}-port:`)
   }
   if (summary.returnLoss?.length) {
@@ -33,7 +33,7 @@ export function summaryLines(summary: SnapshotSummary): string[] {
     const b = summary.balance
     lines.push(`Balance S${b.a}${b.from}/S${b.b}${b.from}: ${dB(b.imbalanceDb)} apart, ${deg(b.phaseDifferenceDeg)} phase difference`)
   }
-  if (summary.bandwidth === null) lines.push('No spec mask, so no bandwidth.')
+  if (summary.bandwidth === null) lines.push('No spec, so no bandwidth.')
   else if (summary.bandwidth?.ok) {
     const w = summary.bandwidth
     lines.push(`Meets the spec from ${formatHz(w.low)} to ${formatHz(w.high)} (${(w.fractional * 100).toFixed(1)} % fractional bandwidth)`)

@@ -24,7 +24,7 @@ describe('snapshot summary', () => {
     expect(s.bandwidth).toBeNull()
   })
 
-  it('takes the centre and the band from the spec mask when the document has one', () => {
+  it('takes the centre and the band from the spec when the document has one', () => {
     const withSpec: NetworkDocument = { ...structuredClone(branchLineHybrid), spec: { center: 2.45e9, conditions: [{ measure: 'returnLoss', port: 1, min: 20 }] } }
     const s = snapshotSummary(withSpec)
     expect(s.centre).toEqual({ frequency: 2.45e9, from: 'spec' })
@@ -37,7 +37,7 @@ describe('snapshot summary', () => {
     expect(s.bandwidth.fractional).toBeLessThan(0.2)
   })
 
-  it('says why a spec mask it cannot read gives no band', () => {
+  it('says why a spec it cannot read gives no band', () => {
     const s = snapshotSummary({ ...structuredClone(branchLineHybrid), spec: { center: -1, conditions: [] } })
     expect(s.bandwidth).toMatchObject({ ok: false })
     expect(s.bandwidth && !s.bandwidth.ok && s.bandwidth.reason).toMatch(/spec cannot be read \(spec.center: must be greater than zero/)
@@ -70,6 +70,6 @@ describe('snapshot summary', () => {
     const lines = summaryLines(snapshotSummary(branchLineHybrid))
     expect(lines[0]).toBe('At 2.450 GHz (centre from the variable f0), 4-port:')
     expect(lines).toContain('Balance S21/S31: 0.00 dB apart, 90.0° phase difference')
-    expect(lines.at(-1)).toBe('No spec mask, so no bandwidth.')
+    expect(lines.at(-1)).toBe('No spec, so no bandwidth.')
   })
 })
