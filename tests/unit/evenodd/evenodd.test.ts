@@ -115,7 +115,7 @@ describe('even/odd decomposition', () => {
     expectClose({ re: full.re[12]!, im: full.im[12]! }, { re: 0, im: 0 }, 1e-12)
   })
 
-  it('ABCD ↔ S round trip and the primer check: a 100 Ω quarter-wave line in 50 Ω has S11 = 0.6, S21 = −0.8j (Pozar Table 4.2)', () => {
+  it('ABCD ↔ S round trip: a 100 Ω quarter-wave line in 50 Ω has S11 = 0.6, S21 = −0.8j (Pozar Table 4.2)', () => {
     const line = { a: { re: 0, im: 0 }, b: { re: 0, im: 100 }, c: { re: 0, im: 0.01 }, d: { re: 0, im: 0 } }
     const s = abcdToS(line, 50)
     expectClose(s.s11, { re: 0.6, im: 0 }, 1e-14)

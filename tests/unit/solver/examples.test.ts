@@ -18,8 +18,8 @@ describe('shipped examples', () => {
   }
 
   it('the 4×4 matrix gives each input equal amplitudes with progressive phase at f0', () => {
-    // Primer §6 (beamforming matrix): equal amplitudes (−6.02 dB) at the four outputs and a
-    // progressive phase of ±45° or ±135° per input (Butler-type matrix, common practice).
+    // Common practice for a 4×4 beamforming matrix: equal amplitudes (−6.02 dB = 1/4 of the power) at the
+    // four outputs and a progressive phase of ±45° or ±135° per input (Hansen, Phased Array Antennas, 2nd ed., [memory]).
     const r = solveAt(butlerMatrix4x4, [F0])
     const progression: number[] = []
     for (let input = 1; input <= 4; input++) {

@@ -53,7 +53,8 @@ describe('quadrature hybrid', () => {
   })
 
   it('unequal branch model: coupling as asked, matched and isolated at f0', () => {
-    // Primer §5 [derived]: z_t = √(1 − c²), z_s = z_t/c give match and isolation at f0; c = 10^(−6/20).
+    // Derived by hand from the even/odd half circuits of Pozar, 4th ed., §7.5: through arms z_t = √(1 − c²),
+    // shunt arms z_s = z_t/c (normalised) give match and isolation at f0; c = 10^(−6/20).
     const r = solveAt(single('hybrid90', { model: 'branch', at: 'f0', couplingDb: 6 }, 4), [F0])
     const m = matrix(r)
     const c = 10 ** (-6 / 20)

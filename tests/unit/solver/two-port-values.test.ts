@@ -84,14 +84,14 @@ describe('stubs', () => {
   }
 
   it('λ/8 short-circuited 50 Ω stub is +j50 Ω', () => {
-    // Primer §3; Pozar, 4th ed., eq. 2.44 (Z_in = jZ0 tan βl).
+    // Pozar, 4th ed., eq. 2.44 (Z_in = jZ0 tan βl).
     const [r, x] = zin('short')
     expect(r).toBeCloseTo(0, 9)
     expect(x).toBeCloseTo(50, 9)
   })
 
   it('λ/8 open-circuited 50 Ω stub is −j50 Ω', () => {
-    // Primer §3; Pozar, 4th ed., eq. 2.46 (Z_in = −jZ0 cot βl).
+    // Pozar, 4th ed., eq. 2.46 (Z_in = −jZ0 cot βl).
     const [r, x] = zin('open')
     expect(r).toBeCloseTo(0, 9)
     expect(x).toBeCloseTo(-50, 9)
