@@ -3,9 +3,10 @@
  * inner documents of sub-networks (for the solve worker and for terminals) and each data file's
  * or inner network's ports. One instance per project, shared by the canvas, inspector and worker.
  */
-import { shallowRef, triggerRef } from 'vue'
+import { getCurrentInstance, inject, shallowRef, triggerRef, type InjectionKey } from 'vue'
 import type { NetworkDocument } from '~~/shared/network/types'
-import type { NetworkDto, NetworkSummaryDto, StoredFileDto } from '~~/shared/types/api'
+import type { NetworkDto, NetworkSummaryDto, StoredFileDataDto, StoredFileDto } from '~~/shared/types/api'
+import { projectDataLoader } from '~~/app/utils/editor/projectDataLoader'
 import { externalRef, innerPorts, subnetworkRefs, type ExternalPorts } from '~~/app/utils/editor/externalTerminals'
 
 function createParts(projectId: string) {
@@ -68,14 +69,22 @@ function createParts(projectId: string) {
     return doc ? innerPorts(doc) : undefined
   }
 
-  return { files, networks, inner, loadFiles, loadNetworks, loadInner, networkFor, refresh, portsOf }
+  /** A file's S-parameters as the project holds it now (the inspector's preview). */
+  const fileData = (file: StoredFileDto) => $fetch<StoredFileDataDto>(`/api/projects/${projectId}/files/${file.id}/data`)
+
+  return { files, networks, inner, loadFiles, loadNetworks, loadInner, networkFor, refresh, portsOf, fileData, loadData: projectDataLoader(projectId), frozen: false }
 }
 
 export type ProjectParts = ReturnType<typeof createParts>
 const instances = new Map<string, ProjectParts>()
 
-/** The shared parts state of a project. */
+/** Pages that show something frozen (a snapshot) provide its parts under this key; the editor's components then use them. */
+export const frozenPartsKey: InjectionKey<ProjectParts> = Symbol('frozen project parts')
+
+/** The shared parts state of a project (or the frozen parts a page above provides). */
 export function useProjectParts(projectId: string): ProjectParts {
+  const provided = getCurrentInstance() ? inject(frozenPartsKey, null) : null
+  if (provided) return provided
   // On the server each request gets its own: nothing of one user's project stays for another.
   if (import.meta.server) return createParts(projectId)
   let parts = instances.get(projectId)

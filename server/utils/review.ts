@@ -1,6 +1,6 @@
 import type { H3Event } from 'h3'
 import { z } from 'zod'
-import { Comment, Network, Review, ReviewEvent, ReviewReviewer, Snapshot, StoredFile, User, type Project } from '~~/server/database/models'
+import { Comment, Network, Review, ReviewEvent, ReviewReviewer, Snapshot, User, type Project } from '~~/server/database/models'
 import type { NetworkDocument } from '#shared/network/types'
 import type {
   CommentAnchor, CommentDto, PersonDto, ReviewDto, SnapshotListItemDto, SnapshotSummary,
@@ -9,7 +9,7 @@ import { findMentions, findUnmatchedMentions, type UnmatchedMention } from '#sha
 import { formatHz } from '#shared/review/summary-lines'
 import { mentionMail } from '~~/server/mail/messages'
 import { listMembers } from './members'
-import { summariseInPool } from './solve-pool'
+import { gatherSnapshotParts, summariseWithParts } from './snapshot-parts'
 
 /** Loads a snapshot of the given project from the route's `snapshotId`; 404 when it is not there. */
 export async function requireSnapshot(event: H3Event, projectId: string): Promise<{ snapshot: Snapshot; network: Network }> {
@@ -32,7 +32,7 @@ export async function requireReview(event: H3Event, projectId: string): Promise<
 export async function requireComment(event: H3Event, projectId: string): Promise<{ comment: Comment; snapshot: Snapshot; network: Network }> {
   const { commentId } = paramsAs(event, z.object({ commentId: z.uuid() }))
   const comment = await Comment.findByPk(commentId)
-  const snapshot = comment && await Snapshot.findByPk(comment.snapshotId, { attributes: { exclude: ['document'] } })
+  const snapshot = comment && await Snapshot.findByPk(comment.snapshotId, { attributes: { exclude: ['document', 'networks'] } })
   const network = snapshot && await Network.findOne({ where: { id: snapshot.networkId, projectId }, attributes: { exclude: ['document'] } })
   if (!comment || !snapshot || !network) throw createError({ statusCode: 404, message: 'Comment not found.' })
   return { comment, snapshot, network }
@@ -47,27 +47,11 @@ export async function peopleById(ids: Array<string | null | undefined>): Promise
 }
 
 /**
- * The snapshot summary of a document, with subnetworks taken from the same project's
- * networks (by id or by name), as the editor resolves them.
+ * The snapshot summary of a document, with subnetworks and data files taken from the same
+ * project as they are now (by id or by name), as the editor resolves them.
  */
 export async function summariseDocument(projectId: string, document: NetworkDocument): Promise<SnapshotSummary> {
-  const networks = await Network.findAll({ where: { projectId }, attributes: ['id', 'name', 'document'] })
-  const byRef = new Map<string, unknown>()
-  for (const n of networks) {
-    byRef.set(n.id, n.document)
-    if (!byRef.has(n.name)) byRef.set(n.name, n.document)
-  }
-  // Only the files that some data block names travel to the worker.
-  const named = new Set<string>()
-  for (const doc of [document, ...networks.map(n => n.document)]) {
-    for (const block of doc.blocks ?? []) {
-      const file = (block.params as Record<string, unknown> | undefined)?.file
-      if (block.type === 'data' && typeof file === 'string') named.add(file)
-    }
-  }
-  const files = named.size ? await StoredFile.findAll({ where: { projectId, name: [...named] }, attributes: ['name', 'data'] }) : []
-  // Solved in the worker pool with a time and memory budget, never on the event loop every team shares.
-  return summariseInPool({ document, networks: [...byRef], files: files.map(f => [f.name, f.data.toString('latin1')]) })
+  return summariseWithParts(document, await gatherSnapshotParts(projectId, document))
 }
 
 /** List entries for snapshots, with their latest review and open comment threads. */

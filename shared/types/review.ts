@@ -1,5 +1,5 @@
 import type { NetworkDocument } from '../network/types'
-import type { ProjectRole } from './api'
+import type { ProjectRole, StoredFileSummary } from './api'
 import type { SnapshotSummary } from '../review/snapshot-summary'
 import type { DocumentDiff } from '../review/document-diff'
 import type { UnmatchedMention } from '../review/mentions'
@@ -68,10 +68,22 @@ export interface SnapshotListItemDto {
 }
 
 /** One snapshot with its frozen document. */
+/**
+ * What a snapshot froze besides its own document: the networks it uses as sub-networks (by the
+ * reference its blocks use, transitively) and its copies of the data files they read.
+ */
+export interface FrozenPartsDto {
+  networks: Array<[string, NetworkDocument]>
+  /** The copies' names, the version each file had when frozen, the project file it came from (null once deleted). */
+  files: Array<{ name: string; fileId: string | null; version: number; summary: StoredFileSummary }>
+}
+
 export interface SnapshotDto extends SnapshotListItemDto {
   projectId: string
   networkName: string
   document: NetworkDocument
+  /** Its frozen inner networks and data files; null for a snapshot made before snapshots kept them (it reads the live ones). */
+  frozen: FrozenPartsDto | null
   /** The caller's role in the project, so pages can offer what it allows. */
   role: ProjectRole
 }
@@ -125,6 +137,8 @@ export interface CompareSideDto {
   id: string
   label: string
   document: NetworkDocument
+  /** The inner networks and data files this side is solved with (a snapshot's frozen ones, or the live ones now); null: read the live ones. */
+  parts: FrozenPartsDto | null
   /** The live network's revision, for a restore that must not overwrite newer work. */
   revision?: number
 }

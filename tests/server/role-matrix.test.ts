@@ -129,6 +129,7 @@ const policy: Record<string, RouteCase> = {
   'POST /api/projects/:projectId/networks/:networkId/snapshots': { rule: 'editor', prepare: async f => ({ path: `/api/projects/${f.projectId}/networks/${f.networkId}/snapshots`, body: { title: 'Matrix snapshot' } }) },
   'GET /api/projects/:projectId/snapshots/:snapshotId': { rule: 'viewer', prepare: async f => ({ path: `/api/projects/${f.projectId}/snapshots/${f.snapshotId}` }) },
   'GET /api/projects/:projectId/snapshots/:snapshotId/compare': { rule: 'viewer', prepare: async f => ({ path: `/api/projects/${f.projectId}/snapshots/${f.snapshotId}/compare?with=live` }) },
+  'GET /api/projects/:projectId/snapshots/:snapshotId/data': { rule: 'viewer', prepare: async f => ({ path: await frozenDataPath(f) }) },
   'POST /api/projects/:projectId/snapshots/:snapshotId/restore': {
     rule: 'editor',
     prepare: async (f) => {
@@ -241,6 +242,26 @@ const TOUCHSTONE_ONE_PORT = '! Quillmere matrix load\n# GHZ S RI R 50\n1 -0.3333
 async function uploadedFile(f: Fixture): Promise<string> {
   const answer = await f.owner.request('POST', `/api/projects/${f.projectId}/files`, fileForm(`fixture-${crypto.randomUUID().slice(0, 8)}.s1p`, TOUCHSTONE_ONE_PORT))
   return answer.body.id
+}
+
+let frozenData: string | undefined
+
+/** The data route of a snapshot that froze a data file (made once: a network with a data block on a fresh upload). */
+async function frozenDataPath(f: Fixture): Promise<string> {
+  if (frozenData) return frozenData
+  const name = `frozen-${crypto.randomUUID().slice(0, 8)}.s1p`
+  await f.owner.request('POST', `/api/projects/${f.projectId}/files`, fileForm(name, TOUCHSTONE_ONE_PORT))
+  const document = {
+    format: 'portwright.network', version: 1.1, name: 'Matrix data network', referenceImpedance: 50, variables: {},
+    sweep: { start: '1 GHz', stop: '2 GHz', points: 3, spacing: 'linear' },
+    blocks: [{ id: 'P1', type: 'port', params: { index: 1 } }, { id: 'DA1', type: 'data', params: { file: name } }],
+    wires: [['P1.1', 'DA1.1']],
+  }
+  const network = await f.owner.post(`/api/projects/${f.projectId}/networks`, { name: 'Matrix data network', document })
+  expect(network.status, JSON.stringify(network.body)).toBe(201)
+  const snapshot = await f.owner.post(`/api/projects/${f.projectId}/networks/${network.body.id}/snapshots`, { title: 'Matrix frozen data' })
+  expect(snapshot.status, JSON.stringify(snapshot.body)).toBe(201)
+  return frozenData = `/api/projects/${f.projectId}/snapshots/${snapshot.body.id}/data?file=${encodeURIComponent(name)}`
 }
 
 /** A fresh board in the matrix project's substrate library (each call its own). */

@@ -9,6 +9,7 @@ import * as m0007 from './0007-file-versions'
 import * as m0008 from './0008-access-tokens'
 import * as m0009 from './0009-substrate-library'
 import * as m0010 from './0010-jobs'
+import * as m0011 from './0011-snapshot-parts'
 
 export interface MigrationStep {
   name: string
@@ -28,4 +29,5 @@ export const migrations: MigrationStep[] = [
   { name: '0008-access-tokens', ...m0008 },
   { name: '0009-substrate-library', ...m0009 },
   { name: '0010-jobs', ...m0010 },
+  { name: '0011-snapshot-parts', ...m0011 },
 ]

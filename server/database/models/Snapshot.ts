@@ -10,6 +10,11 @@ export class Snapshot extends Model<InferAttributes<Snapshot>, InferCreationAttr
   declare document: NetworkDocument
   declare summary: CreationOptional<Record<string, unknown>>
   declare networkRevision: number
+  /**
+   * Documents of the networks it uses as sub-networks, as [reference, document] pairs (pairs, so a
+   * hostile reference such as "__proto__" stays plain data); null for snapshots made before this was kept.
+   */
+  declare networks: CreationOptional<{ pairs: Array<[string, NetworkDocument]> } | null>
   declare createdBy: string | null
   declare createdAt: CreationOptional<Date>
 
@@ -22,6 +27,7 @@ export class Snapshot extends Model<InferAttributes<Snapshot>, InferCreationAttr
       document: { type: DataTypes.JSONB, allowNull: false },
       summary: { type: DataTypes.JSONB, allowNull: false, defaultValue: {} },
       networkRevision: { type: DataTypes.INTEGER, allowNull: false },
+      networks: { type: DataTypes.JSONB, allowNull: true },
       createdBy: { type: DataTypes.UUID, allowNull: true },
       createdAt: DataTypes.DATE,
     }, { sequelize, tableName: 'snapshots', underscored: true, updatedAt: false })

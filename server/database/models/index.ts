@@ -22,6 +22,7 @@ import { NetworkCheckpoint } from './NetworkCheckpoint'
 import { Job } from './Job'
 import { JobChunk } from './JobChunk'
 import { ProjectSubstrate } from './ProjectSubstrate'
+import { SnapshotFile } from './SnapshotFile'
 
 export { User, Project, Membership, Network, Snapshot, Comment, StoredFile, AuditEvent }
 export { Invitation, Review, ReviewReviewer, ReviewEvent, OutboxMessage }
@@ -31,6 +32,7 @@ export { AccessToken, AccessTokenProject }
 export { NetworkCheckpoint }
 export { Job, JobChunk }
 export { ProjectSubstrate }
+export { SnapshotFile }
 
 /** Binds every model to one Sequelize instance. */
 export function setupModels(sequelize: Sequelize): void {
@@ -44,4 +46,5 @@ export function setupModels(sequelize: Sequelize): void {
   NetworkCheckpoint.setup(sequelize)
   for (const model of [Job, JobChunk]) model.setup(sequelize)
   ProjectSubstrate.setup(sequelize)
+  SnapshotFile.setup(sequelize)
 }

@@ -20,15 +20,19 @@ export default defineEventHandler(async (event): Promise<RestoreResultDto> => {
   const outcome = await useDatabase().transaction(async (transaction): Promise<Outcome> => {
     const live = await Network.findByPk(network.id, { transaction, lock: transaction.LOCK.UPDATE })
     if (!live || live.revision !== body.revision) return { stale: live?.revision ?? null }
+    // What is replaced is frozen like any snapshot: with its inner networks and data files as they are now.
+    const parts = await gatherSnapshotParts(project.id, live.document, transaction)
     const kept = await Snapshot.create({
       networkId: live.id,
       title: `Before restoring “${snapshot.title}”`.slice(0, 200),
       note: `Kept automatically when revision ${live.revision} was replaced by the snapshot “${snapshot.title}”.`,
       document: live.document,
-      summary: await summariseDocument(project.id, live.document) as unknown as Record<string, unknown>,
+      summary: await summariseWithParts(live.document, parts) as unknown as Record<string, unknown>,
       networkRevision: live.revision,
+      networks: frozenNetworksColumn(parts),
       createdBy: user.id,
     }, { transaction })
+    await storeSnapshotFiles(kept.id, parts, transaction)
     // The name stays the network's: a snapshot of an older name should not rename it.
     const document = { ...snapshot.document, name: live.document.name ?? live.name }
     const replacedBy = live.updatedBy

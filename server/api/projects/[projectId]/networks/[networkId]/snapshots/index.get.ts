@@ -6,7 +6,7 @@ export default defineEventHandler(async (event) => {
   const network = await requireNetwork(event, project.id)
   const snapshots = await Snapshot.findAll({
     where: { networkId: network.id },
-    attributes: { exclude: ['document'] },
+    attributes: { exclude: ['document', 'networks'] },
     order: [['createdAt', 'DESC']],
   })
   return snapshotListItems(snapshots)

@@ -3,8 +3,9 @@ import { Network, Snapshot } from '~~/server/database/models'
 import type { SnapshotDto } from '#shared/types/review'
 
 /**
- * Freezes the network as saved now (owners and editors): title, note, the full document
- * and its solver summary. With `revision`, a network saved since then answers 409, so
+ * Freezes the network as saved now (owners and editors): title, note, the full document,
+ * the documents of the networks it uses as sub-networks and copies of the data files they
+ * all read, and its solver summary. With `revision`, a network saved since then answers 409, so
  * nobody freezes a version other than the one on their screen. A network that does not
  * solve is frozen all the same, its problem kept in the summary and the audit trail, unless
  * `allowUnsolved: false` asks to be told first (422 naming the problem, nothing stored).
@@ -23,19 +24,26 @@ export default defineEventHandler(async (event): Promise<SnapshotDto> => {
       data: { revision: network.revision },
     })
   }
-  const summary = await summariseDocument(project.id, network.document)
+  // The inner networks and data files it uses are frozen with it: later edits to them never change this snapshot.
+  const parts = await gatherSnapshotParts(project.id, network.document)
+  const summary = await summariseWithParts(network.document, parts)
   if (!summary.solved && !body.allowUnsolved) throw unsolvedRefusal('network', summary.problem)
-  const snapshot = await Snapshot.create({
-    networkId: network.id,
-    title: body.title,
-    note: body.note,
-    document: network.document,
-    summary: summary as unknown as Record<string, unknown>,
-    networkRevision: network.revision,
-    createdBy: user.id,
+  const snapshot = await useDatabase().transaction(async (transaction) => {
+    const made = await Snapshot.create({
+      networkId: network.id,
+      title: body.title,
+      note: body.note,
+      document: network.document,
+      summary: summary as unknown as Record<string, unknown>,
+      networkRevision: network.revision,
+      networks: frozenNetworksColumn(parts),
+      createdBy: user.id,
+    }, { transaction })
+    await storeSnapshotFiles(made.id, parts, transaction)
+    return made
   })
   await recordAudit('snapshot.created', user.id, project.id, { snapshotId: snapshot.id, networkId: network.id, title: snapshot.title, revision: network.revision, ...unsolvedDetail(summary) })
   setResponseStatus(event, 201)
   const [item] = await snapshotListItems([snapshot])
-  return { ...item!, projectId: project.id, networkName: network.name, document: snapshot.document, role }
+  return { ...item!, projectId: project.id, networkName: network.name, document: snapshot.document, frozen: await frozenPartsDto(snapshot), role }
 })
