@@ -11,6 +11,7 @@ import { readNetworkStrict } from '#shared/live/strict-read'
 import type { NetworkDocument } from '#shared/network/types'
 import { useDatabase } from '~~/server/utils/database'
 import { checkpointAfterMerge, withoutRisk } from '~~/server/utils/checkpoints'
+import { followNetworkRename } from './follow-rename'
 
 /** Channel of "an update was stored": payload `<networkId> <updateId> <instanceId>`. */
 export const UPDATE_CHANNEL = 'portwright_live_update'
@@ -112,8 +113,8 @@ export async function mergeLiveState(networkId: string, options: { final?: boole
     }
     doc.destroy()
     const lastAuthor = [...updates].reverse().find(u => u.userId)?.userId ?? null
-    const before = await db.query<{ document: NetworkDocument, revision: number, updated_by: string | null }>(
-      'SELECT document, revision, updated_by FROM networks WHERE id = $1 FOR UPDATE', { bind: [networkId], type: QueryTypes.SELECT, transaction },
+    const before = await db.query<{ document: NetworkDocument, revision: number, updated_by: string | null, name: string, project_id: string }>(
+      'SELECT document, revision, updated_by, name, project_id FROM networks WHERE id = $1 FOR UPDATE', { bind: [networkId], type: QueryTypes.SELECT, transaction },
     )
     const changed = await db.query<{ revision: number }>(
       `UPDATE networks SET document = $2::jsonb, name = COALESCE(NULLIF($3, ''), name), revision = revision + 1,
@@ -121,6 +122,14 @@ export async function mergeLiveState(networkId: string, options: { final?: boole
        WHERE id = $1 AND document IS DISTINCT FROM $2::jsonb RETURNING revision`,
       { bind: [networkId, JSON.stringify(parsed.document), (parsed.document.name ?? '').trim().slice(0, 200), lastAuthor], type: QueryTypes.SELECT, transaction },
     )
+    const newName = (parsed.document.name ?? '').trim().slice(0, 200)
+    if (changed.length && before.length && newName && newName !== before[0]!.name) {
+      // A rename typed in the editor: networks using this one as a sub-network by its old name follow it.
+      const by = lastAuthor ?? before[0]!.updated_by
+      await withoutRisk(transaction, `networks using ${networkId} after a rename`, t => followNetworkRename({
+        projectId: before[0]!.project_id, networkId, from: before[0]!.name, to: newName, userId: by,
+      }, t))
+    }
     if (before.length) {
       const authors = [...new Set(updates.map(u => u.userId).filter((id): id is string => !!id))]
       await withoutRisk(transaction, `network ${networkId} after a live merge`, t => checkpointAfterMerge({
@@ -154,6 +163,30 @@ export async function applyDocumentToLiveState(networkId: string, document: Netw
   const diff = Y.encodeStateAsUpdate(doc, before)
   doc.destroy()
   // An update with no new items and no deletions is two zero bytes: nothing to log.
+  if (diff.length <= 2) return false
+  await appendUpdate(networkId, diff, userId, instanceId, transaction)
+  return true
+}
+
+/**
+ * Applies an edit made on the server (not by an editor) to a network's live state as one logged update:
+ * the edit sees the live document (merged state plus the log, so co-editors' newest work is kept) and only
+ * what it changes is written. Does nothing for a network never opened live or whose live state does not
+ * read as a document; false then and when the edit changes nothing.
+ */
+export async function editLiveState(networkId: string, edit: (document: NetworkDocument) => NetworkDocument, userId: string | null, instanceId: string, transaction?: Transaction): Promise<boolean> {
+  const db = useDatabase()
+  const states = await db.query<{ state: Buffer }>('SELECT state FROM network_live_states WHERE network_id = $1', { bind: [networkId], type: QueryTypes.SELECT, transaction })
+  if (!states.length) return false
+  const doc = new Y.Doc()
+  Y.applyUpdate(doc, bytes(states[0]!.state))
+  for (const u of await pendingUpdates(networkId, transaction)) Y.applyUpdate(doc, u.data)
+  const parsed = readNetworkStrict(doc)
+  if (!parsed.ok) { doc.destroy(); return false }
+  const before = Y.encodeStateVector(doc)
+  doc.transact(() => writeNetwork(doc, edit(parsed.document)))
+  const diff = Y.encodeStateAsUpdate(doc, before)
+  doc.destroy()
   if (diff.length <= 2) return false
   await appendUpdate(networkId, diff, userId, instanceId, transaction)
   return true

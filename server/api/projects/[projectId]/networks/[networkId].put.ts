@@ -1,10 +1,12 @@
 import { updateNetworkSchema } from '#shared/schemas/network'
 import { Network } from '~~/server/database/models'
+import { followNetworkRename } from '~~/server/live/follow-rename'
 
 /**
  * Replaces the document (owners and editors). The caller sends the revision its
  * edit was based on; a stale revision answers 409 and stores nothing. Every
- * save is a history checkpoint.
+ * save is a history checkpoint. A new name is followed by the project's networks
+ * that use this one as a sub-network under its old name.
  */
 export default defineEventHandler(async (event) => {
   const { user, project, role } = await requireProjectRole(event, 'editor')
@@ -20,6 +22,13 @@ export default defineEventHandler(async (event) => {
     )
     if (result[0] > 0) {
       await liveDocumentSaved(existing.id, document, user.id, transaction)
+      // A rename: the project's networks that use this one as a sub-network by its old name follow it.
+      const renamed = result[1][0]!.name
+      if (renamed !== existing.name) {
+        await withoutRisk(transaction, `networks using ${existing.id} after a rename`, t => followNetworkRename({
+          projectId: project.id, networkId: existing.id, from: existing.name, to: renamed, userId: user.id,
+        }, t))
+      }
       // History: every save is a checkpoint; what it replaced is kept too when no checkpoint holds it yet.
       await withoutRisk(transaction, `network ${existing.id} after a save`, t => checkpointWrite({
         networkId: existing.id,
