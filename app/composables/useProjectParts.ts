@@ -16,6 +16,7 @@ function createParts(projectId: string) {
   const inner = shallowRef(new Map<string, NetworkDocument | null>())
   let filesLoad: Promise<void> | null = null
   let networksLoad: Promise<void> | null = null
+  let dataLoader = projectDataLoader(projectId)
 
   const loadFiles = (again = false) => (!filesLoad || again)
     ? (filesLoad = $fetch<StoredFileDto[]>(`/api/projects/${projectId}/files`).then((list) => { files.value = list }, () => {}))
@@ -51,6 +52,7 @@ function createParts(projectId: string) {
 
   /** Forget the inner documents and lists, so the next solve reads them again (after edits elsewhere). */
   function refresh() {
+    dataLoader = projectDataLoader(projectId)
     inner.value = new Map()
     filesLoad = null
     networksLoad = null
@@ -71,8 +73,10 @@ function createParts(projectId: string) {
 
   /** A file's S-parameters as the project holds it now (the inspector's preview). */
   const fileData = (file: StoredFileDto) => $fetch<StoredFileDataDto>(`/api/projects/${projectId}/files/${file.id}/data`)
+  /** Data sets of data blocks by file name, for the solve worker; its file list is read afresh after each refresh. */
+  const loadData = (name: string) => dataLoader(name)
 
-  return { files, networks, inner, loadFiles, loadNetworks, loadInner, networkFor, refresh, portsOf, fileData, loadData: projectDataLoader(projectId), frozen: false }
+  return { files, networks, inner, loadFiles, loadNetworks, loadInner, networkFor, refresh, portsOf, fileData, loadData, frozen: false }
 }
 
 export type ProjectParts = ReturnType<typeof createParts>

@@ -1,4 +1,5 @@
 // Snapshots freeze what they use: the inner networks of their sub-network blocks and the data files read inside.
+import pg from 'pg'
 import { beforeAll, describe, expect, it } from 'vitest'
 import { fileForm, newSignedInUser } from '../support/http'
 import type { NetworkDocument } from '../../shared/network/types'
@@ -126,6 +127,28 @@ describe('snapshots freeze their inner networks and data files', () => {
     expect(attenuation(compared.body.after.parts)).toBe(10)
     expect(compared.body.before.parts.files[0].version).toBe(1)
     expect(compared.body.after.parts.files[0].version).toBe(2)
+  })
+
+  it('a snapshot made before snapshots froze their parts still reads the live ones', async () => {
+    const snapshot = await owner.client.post(`${base}/networks/${outerId}/snapshots`, { title: 'Made the old way' })
+    expect(snapshot.status).toBe(201)
+    // As a snapshot stored before migration 0011 looks: no frozen networks, no file copies.
+    const db = new pg.Client({ connectionString: process.env.PORTWRIGHT_TEST_DATABASE_URL })
+    await db.connect()
+    try {
+      await db.query('UPDATE snapshots SET networks = NULL WHERE id = $1', [snapshot.body.id])
+      await db.query('DELETE FROM snapshot_files WHERE snapshot_id = $1', [snapshot.body.id])
+    } finally {
+      await db.end()
+    }
+    const shown = await viewer.client.get(`${base}/snapshots/${snapshot.body.id}`)
+    expect(shown.status).toBe(200)
+    expect(shown.body.frozen).toBeNull()
+    expect((await viewer.client.get(`${base}/snapshots/${snapshot.body.id}/data?file=pad.s2p`)).status).toBe(404)
+    const compared = await viewer.client.get(`${base}/snapshots/${snapshot.body.id}/compare?with=live`)
+    expect(compared.status).toBe(200)
+    expect(compared.body.before.parts).toBeNull()
+    expect(compared.body.after.parts.networks.map(([ref]: [string]) => ref)).toEqual(['Inner pad'])
   })
 
   it('lets a file that only snapshots use be deleted; the snapshots keep their copy', async () => {
