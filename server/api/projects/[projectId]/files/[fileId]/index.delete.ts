@@ -1,4 +1,4 @@
-/** Deletes a data file (owners and editors), refused while a network's data block uses it. */
+/** Deletes a data file (owners and editors), refused while a network's data block uses it. Snapshots keep their own copies (table `snapshot_files`), so they neither block this nor lose their data. */
 export default defineEventHandler(async (event) => {
   const { user, project } = await requireProjectRole(event, 'editor')
   const file = await requireStoredFile(event, project.id)
