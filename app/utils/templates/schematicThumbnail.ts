@@ -2,7 +2,7 @@ import type { NetworkDocument } from '~~/shared/network/types'
 import { GRID, kindSpec } from '../editor/blockCatalog'
 import { externalShape } from '../editor/externalTerminals'
 import { orientedSize, placeTerminal, type Rotation } from '../editor/geometry'
-import { portsFromFileName } from '../../../shared/touchstone/read'
+import { portsFromFileName } from '~~/shared/touchstone/read'
 
 /** How a block is drawn in a thumbnail: a reduced form of its canvas symbol. */
 export type ThumbnailShape = 'tag' | 'ribbon' | 'square' | 'ring' | 'fork' | 'box'

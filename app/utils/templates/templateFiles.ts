@@ -1,5 +1,5 @@
-import type { NetworkDocument } from '../../../shared/network/types'
-import type { TemplateFile } from '../../../shared/templates/types'
+import type { NetworkDocument } from '~~/shared/network/types'
+import type { TemplateFile } from '~~/shared/templates/types'
 
 /** A project file as the file list gives it (only what choosing a name needs). */
 export interface ListedFile {
