@@ -26,8 +26,8 @@ function sameSweep(a: Float64Array, b: Float64Array): boolean {
  * Shaded bands for the plotted traces that have an envelope over the same sweep: min–max faint, 5–95 % stronger,
  * each in its trace's colour. Traces without one, or recorded over another sweep, get none.
  */
-export function envelopeFills(envelopes: readonly YieldEnvelope[], traces: ReadonlyArray<{ name: string; colour: string }>, frequencies: Float64Array): PlotFill[] {
-  const fills: PlotFill[] = []
+export function envelopeFills(envelopes: readonly YieldEnvelope[], traces: ReadonlyArray<{ name: string; colour: string }>, frequencies: Float64Array): Array<PlotFill & { low: Float64Array; high: Float64Array }> {
+  const fills: Array<PlotFill & { low: Float64Array; high: Float64Array }> = []
   for (const trace of traces) {
     const envelope = envelopes.find(e => e.trace === trace.name)
     if (!envelope || !sameSweep(envelope.frequencies, frequencies)) continue
