@@ -32,7 +32,7 @@ export default defineNuxtConfig({
       // beside the server's, because a worker cannot load a chunk of Nitro's bundle.
       async compiled(nitro) {
         const { build } = await import('esbuild')
-        for (const name of ['solve-summary', 'solve-api', 'read-touchstone']) {
+        for (const name of ['solve-summary', 'solve-api', 'read-touchstone', 'check-job']) {
           await build({
             entryPoints: [join(nitro.options.rootDir, `server/workers/${name}.ts`)],
             outfile: join(nitro.options.output.serverDir, `workers/${name}.mjs`),

@@ -3,8 +3,10 @@ import type { JobDto } from '~~/shared/types/jobs'
 import type { SubmitJobBody } from '~~/shared/schemas/jobs'
 
 /**
- * A network's long runs on the server's queue: send one, follow its progress (polled every second while any run
- * is waiting or running), cancel one. The list is the server's, so every member sees the same runs.
+ * A network's long runs on the server's queue: send one, follow its progress, cancel one. Progress is pushed by
+ * the server (server-sent events, `…/jobs/events`) as workers report it; only while that stream is down is the
+ * list read every second (while any run is waiting or running). The list is the server's, so every member sees
+ * the same runs.
  */
 export function useServerRuns(projectId: string, networkId: string) {
   const base = `/api/projects/${projectId}/networks/${networkId}/jobs`
@@ -13,12 +15,17 @@ export function useServerRuns(projectId: string, networkId: string) {
   const sending = ref(false)
   let timer: ReturnType<typeof setTimeout> | undefined
   let stopped = false
+  /** True while the server's event stream is open: no polling then. */
+  const pushed = ref(false)
+  let source: EventSource | undefined
+  let reopen: ReturnType<typeof setTimeout> | undefined
 
   const unfinished = computed(() => runs.value.some(r => r.state === 'queued' || r.state === 'running'))
 
   const messageOf = (e: unknown) => (e as { data?: { message?: string } }).data?.message ?? 'The server could not be reached; try again.'
 
   async function refresh(): Promise<void> {
+    follow()
     try {
       runs.value = await $fetch<JobDto[]>(base)
       error.value = ''
@@ -30,7 +37,36 @@ export function useServerRuns(projectId: string, networkId: string) {
 
   function schedule(): void {
     clearTimeout(timer)
-    if (!stopped && unfinished.value) timer = setTimeout(refresh, 1000)
+    if (!stopped && unfinished.value && !pushed.value) timer = setTimeout(refresh, 1000)
+  }
+
+  /** One run as the server pushed it: replaces the listed one, or comes first when new. */
+  function merge(job: JobDto): void {
+    runs.value = runs.value.some(r => r.id === job.id) ? runs.value.map(r => (r.id === job.id ? job : r)) : [job, ...runs.value]
+  }
+
+  /** Opens the server's event stream; the browser reopens it after a drop, and polling covers the gap. */
+  function follow(): void {
+    if (stopped || source || typeof EventSource === 'undefined') return
+    const opened = new EventSource(`${base}/events`)
+    source = opened
+    opened.addEventListener('runs', (e) => {
+      runs.value = JSON.parse((e as MessageEvent<string>).data) as JobDto[]
+      error.value = ''
+      pushed.value = true
+      clearTimeout(timer)
+    })
+    opened.addEventListener('run', (e) => { merge(JSON.parse((e as MessageEvent<string>).data) as JobDto) })
+    opened.onerror = () => {
+      pushed.value = false
+      schedule()
+      if (opened.readyState === EventSource.CLOSED) {
+        // Refused (signed out, removed) or the server is gone: poll, and try the stream again later.
+        source = undefined
+        clearTimeout(reopen)
+        if (!stopped) reopen = setTimeout(follow, 15_000)
+      }
+    }
   }
 
   async function send(body: SubmitJobBody): Promise<void> {
@@ -56,6 +92,11 @@ export function useServerRuns(projectId: string, networkId: string) {
     }
   }
 
-  onBeforeUnmount(() => { stopped = true; clearTimeout(timer) })
-  return { runs, error, sending, unfinished, refresh, send, cancel }
+  onBeforeUnmount(() => {
+    stopped = true
+    clearTimeout(timer)
+    clearTimeout(reopen)
+    source?.close()
+  })
+  return { runs, error, sending, unfinished, pushed, refresh, send, cancel }
 }

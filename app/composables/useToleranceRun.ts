@@ -1,7 +1,8 @@
 /**
  * Runs a tolerance analysis in Web Workers, one per logical processor (at most 8), each on its own range
  * of trial indices; counts and traces are joined in index order, so the answer equals a single run's.
- * Progress is the sum of the workers'; cancel ends every worker at once.
+ * Progress is the sum of the workers'; cancel ends every worker at once. Workers that finished are kept
+ * for the next run (and `warm` starts them ahead of the first), so a run does not wait for them to load.
  */
 import { onBeforeUnmount, ref, shallowRef } from 'vue'
 import type { NetworkDocument, Problem } from '~~/shared/network/types'
@@ -29,10 +30,36 @@ export function useToleranceRun() {
   const outcome = shallowRef<ToleranceOutcome | null>(null)
   const problems = shallowRef<Problem[]>([])
   let workers: Worker[] = []
+  /** Loaded workers waiting for a run. */
+  let idle: Worker[] = []
   let runId = 0
+
+  const poolSize = () => Math.min(globalThis.navigator?.hardwareConcurrency || 2, MAX_WORKERS)
+  function spawn(): Worker {
+    const w = new Worker(new URL('../workers/tolerance.worker.ts', import.meta.url), { type: 'module' })
+    // A worker that fails while waiting is dropped; a run sets its own handler when it takes one.
+    w.onerror = () => { idle = idle.filter(x => x !== w); w.terminate() }
+    return w
+  }
+
+  /** Starts the workers a run will use, so they load (scripts, math library) before it begins. */
+  function warm(count = poolSize()) {
+    if (typeof Worker === 'undefined') return
+    while (idle.length < count) idle.push(spawn())
+  }
 
   function stopWorkers() {
     for (const w of workers) w.terminate()
+    workers = []
+  }
+
+  /** A finished run's workers wait for the next one. */
+  function releaseWorkers() {
+    for (const w of workers) {
+      w.onmessage = null
+      w.onerror = () => { idle = idle.filter(x => x !== w); w.terminate() }
+    }
+    idle.push(...workers)
     workers = []
   }
 
@@ -46,7 +73,7 @@ export function useToleranceRun() {
     cancel()
     const finishedRun = new Promise<ToleranceOutcome | null>((resolve) => { settle = resolve })
     const id = ++runId
-    const parts = splitTrials(options.trials, Math.min(globalThis.navigator?.hardwareConcurrency || 2, MAX_WORKERS))
+    const parts = splitTrials(options.trials, poolSize())
     const progress = parts.map(() => 0)
     const finished: Array<Extract<ToleranceReply, { kind: 'done' }> | undefined> = parts.map(() => undefined)
     running.value = true
@@ -54,8 +81,10 @@ export function useToleranceRun() {
     total.value = options.trials
     problems.value = []
     const plain = JSON.parse(JSON.stringify(document)) as NetworkDocument
+    warm(parts.length)
+    const ready = idle.splice(0, parts.length)
     workers = parts.map((part, i) => {
-      const w = new Worker(new URL('../workers/tolerance.worker.ts', import.meta.url), { type: 'module' })
+      const w = ready[i]!
       w.onmessage = (event: MessageEvent<ToleranceReply>) => {
         const reply = event.data
         if (reply.runId !== id) return
@@ -98,7 +127,7 @@ export function useToleranceRun() {
       traces,
     }
     running.value = false
-    stopWorkers()
+    releaseWorkers()
     settle(outcome.value)
     settle = () => {}
   }
@@ -112,6 +141,10 @@ export function useToleranceRun() {
     settle = () => {}
   }
 
-  onBeforeUnmount(cancel)
-  return { start, cancel, running, done, total, outcome, problems }
+  onBeforeUnmount(() => {
+    cancel()
+    for (const w of idle) w.terminate()
+    idle = []
+  })
+  return { start, cancel, warm, running, done, total, outcome, problems }
 }

@@ -7,8 +7,11 @@ import { resolve } from 'node:path'
 import { Piscina } from 'piscina'
 import type PgBoss from 'pg-boss'
 import { connectDatabase } from '../database/connect'
-import { Job, JobChunk, Network } from '../database/models'
+import { Job, JobChunk } from '../database/models'
 import { CHUNK_QUEUE, PLAN_QUEUE, chunkMessageId, openQueue, type ChunkMessage, type PlanMessage } from './queue'
+import { loadProjectInputs, type ProjectInputs } from './project-inputs'
+import { notifyJobChanged } from './progress-channel'
+import { pruneFinishedChunks } from './prune-chunks'
 import { failJob, recordChunk } from './record-chunk'
 import type { ChunkOutcome, ChunkTask } from './run-chunk'
 
@@ -61,13 +64,12 @@ export async function startChunkWorker(databaseUrl: string, log: (line: string) 
       await recordChunk(sequelize, jobId, chunkIndex, { trials: 0, passed: 0, unsolved: 0, outcome: null })
       return
     }
-    if (job.state === 'queued') await Job.update({ state: 'running', startedAt: new Date() }, { where: { id: jobId, state: 'queued' } })
-    const networks = await Network.findAll({ where: { projectId: job.projectId }, attributes: ['id', 'name', 'document'], order: [['createdAt', 'ASC']] })
-    const byRef = new Map<string, unknown>()
-    for (const n of networks) {
-      byRef.set(n.id, n.document)
-      if (!byRef.has(n.name)) byRef.set(n.name, n.document)
+    if (job.state === 'queued') {
+      const [started] = await Job.update({ state: 'running', startedAt: new Date() }, { where: { id: jobId, state: 'queued' } })
+      if (started) await notifyJobChanged(jobId)
     }
+    // Subnetworks and data files as the server's own solves see them; the files are read in the chunk's thread.
+    const inputs: ProjectInputs = await loadProjectInputs(job.projectId, job.document)
     const { timeMs, memoryMb: mb } = chunkBudget(job.kind)
     const stop = new AbortController()
     const timer = setTimeout(() => stop.abort(new Error('time')), timeMs)
@@ -78,7 +80,7 @@ export async function startChunkWorker(databaseUrl: string, log: (line: string) 
     let outcome: ChunkOutcome
     log(`[worker ${process.pid}] job ${jobId} chunk ${chunkIndex + 1}/${job.chunkCount}: started`)
     try {
-      const task: ChunkTask = { parameters: job.parameters, document: job.document, networks: [...byRef], chunkIndex }
+      const task: ChunkTask = { parameters: job.parameters, document: job.document, networks: inputs.networks, files: inputs.files, chunkIndex }
       outcome = await pool.run(task, { signal: stop.signal }) as ChunkOutcome
     } catch (error) {
       const e = error as Error & { code?: string }
@@ -105,12 +107,20 @@ export async function startChunkWorker(databaseUrl: string, log: (line: string) 
     log(`[worker ${process.pid}] job ${jobId} chunk ${chunkIndex + 1}/${job.chunkCount}: ${outcome.trials} trials, ${outcome.passed} passed (${state})`)
   }
 
+  // Upkeep of our own rows beside pg-boss's: the parts of runs finished a while ago.
+  const maintenanceSeconds = envNumber('PORTWRIGHT_JOB_MAINTENANCE_SECONDS', 30)
+  const prune = setInterval(() => {
+    pruneFinishedChunks(sequelize).catch(error => log(`[worker ${process.pid}] could not remove parts of finished runs: ${(error as Error).message}`))
+  }, maintenanceSeconds * 1000)
+  prune.unref()
+
   const options = { batchSize: 1, pollingIntervalSeconds: 0.5 }
   await boss.work<PlanMessage>(PLAN_QUEUE, options, async ([message]) => { if (message) await plan(message.data.jobId) })
   await boss.work<ChunkMessage>(CHUNK_QUEUE, options, async ([message]) => { if (message) await runChunk(message.data) })
 
   return {
     stop: async () => {
+      clearInterval(prune)
       await boss.stop({ graceful: true, wait: true, timeout: 10_000 })
       await pool.destroy()
       await sequelize.close()

@@ -5,6 +5,7 @@
 import { QueryTypes, type Sequelize } from 'sequelize'
 import { Job, JobChunk } from '../database/models'
 import type { JobResult } from '../../shared/types/jobs'
+import { notifyJobChanged } from './progress-channel'
 
 export interface FinishedChunk { trials: number; passed: number; unsolved: number; outcome: unknown }
 
@@ -41,11 +42,13 @@ export async function recordChunk(sequelize: Sequelize, jobId: string, chunkInde
       progressDone,
       ...(complete ? { state: 'done', result, finishedAt: new Date() } : { state: 'running' }),
     }, { transaction })
+    await notifyJobChanged(jobId, transaction)
     return job.state
   })
 }
 
 /** Marks a job failed with a message in the user's words (a chunk over budget, a document that cannot be run). */
 export async function failJob(jobId: string, message: string): Promise<void> {
-  await Job.update({ state: 'failed', error: message, finishedAt: new Date() }, { where: { id: jobId, state: ['queued', 'running'] } })
+  const [changed] = await Job.update({ state: 'failed', error: message, finishedAt: new Date() }, { where: { id: jobId, state: ['queued', 'running'] } })
+  if (changed) await notifyJobChanged(jobId)
 }

@@ -4,14 +4,26 @@
  */
 import type { NetworkDocument } from '../../shared/network/types'
 import type { JobParameters } from '../../shared/types/jobs'
+import { textDataResolver } from '../../shared/touchstone/text-data-resolver'
 import { applyValues, optimizeTunables, prepareTuning, resolveTolerances, resolveTunables, runTrials } from '../../shared/tuning/index'
+import type { TuningSetup } from '../../shared/tuning/index'
 
 export interface ChunkTask {
   parameters: JobParameters
   document: unknown
   /** The project's networks by id and name, for subnetwork blocks. */
   networks: Array<[string, unknown]>
+  /** Touchstone texts of the data files the document and those networks name, by file name. */
+  files?: Array<[string, string]>
   chunkIndex: number
+}
+
+/** What checking a run before it is queued needs: its kind, the document and the project's inputs. */
+export interface JobCheckTask {
+  kind: JobParameters['kind']
+  document: unknown
+  networks: Array<[string, unknown]>
+  files?: Array<[string, string]>
 }
 
 export type ChunkOutcome =
@@ -26,10 +38,24 @@ export function chunkRange(parameters: { trials: number; chunkTrials: number }, 
 
 const messages = (problems: Array<{ message: string }>) => problems.map(p => p.message)
 
-export default function runChunk(task: ChunkTask): ChunkOutcome {
+/** The document prepared for tuning with subnetworks and data files from the task (files read here, in budget). */
+function prepareJob(task: { document: unknown; networks: Array<[string, unknown]>; files?: Array<[string, string]> }): { ok: true; setup: TuningSetup } | { ok: false; problems: string[] } {
   const byRef = new Map(task.networks)
-  const prepared = prepareTuning(task.document, { resolveSubnetwork: ref => byRef.get(ref) })
-  if (!prepared.ok) return { ok: false, problems: messages(prepared.problems) }
+  const prepared = prepareTuning(task.document, { resolveSubnetwork: ref => byRef.get(ref), resolveData: textDataResolver(task.files ?? []) })
+  return prepared.ok ? prepared : { ok: false, problems: messages(prepared.problems) }
+}
+
+/** Problems that would stop a run of this kind (none: it can be queued); the same preparation as every chunk. */
+export function checkJob(task: JobCheckTask): string[] {
+  const prepared = prepareJob(task)
+  if (!prepared.ok) return prepared.problems
+  const resolved = task.kind === 'tolerance' ? resolveTolerances(prepared.setup) : resolveTunables(prepared.setup)
+  return resolved.ok ? [] : messages(resolved.problems)
+}
+
+export default function runChunk(task: ChunkTask): ChunkOutcome {
+  const prepared = prepareJob(task)
+  if (!prepared.ok) return prepared
   const p = task.parameters
   if (p.kind === 'tolerance') {
     const spreads = resolveTolerances(prepared.setup)

@@ -4,6 +4,7 @@ import { Piscina } from 'piscina'
 import summariseInProcess, { type SummaryTask } from '~~/server/workers/solve-summary'
 import solveApiInProcess, { type ApiSolveTask } from '~~/server/workers/solve-api'
 import readTouchstoneInProcess, { type ReadTouchstoneOutcome, type ReadTouchstoneTask } from '~~/server/workers/read-touchstone'
+import checkJobInProcess, { type JobCheckTask } from '~~/server/workers/check-job'
 import type { SnapshotSummary } from '#shared/review/snapshot-summary'
 import type { ApiSolveOutcome } from '#shared/automation/api-solve'
 
@@ -13,6 +14,8 @@ export const SOLVE_WORKER_FILE = 'workers/solve-summary.mjs'
 export const API_SOLVE_WORKER_FILE = 'workers/solve-api.mjs'
 /** File name of the bundled Touchstone reader (uploads, and stored files read again for the editor). */
 export const READ_TOUCHSTONE_WORKER_FILE = 'workers/read-touchstone.mjs'
+/** File name of the bundled check of a run before it is queued. */
+export const CHECK_JOB_WORKER_FILE = 'workers/check-job.mjs'
 
 const envNumber = (name: string, fallback: number): number => {
   const value = Number(process.env[name])
@@ -78,6 +81,11 @@ export function solveApiInPool(task: ApiSolveTask): Promise<ApiSolveOutcome> {
 /** A Touchstone file read in the pool, within the same budget, so a large upload never holds the event loop. */
 export function readTouchstoneInPool(task: ReadTouchstoneTask): Promise<ReadTouchstoneOutcome> {
   return runInPool(READ_TOUCHSTONE_WORKER_FILE, task, readTouchstoneInProcess, 'file')
+}
+
+/** Problems that would stop a queued run (none: it may be queued), found in the pool within the same budget. */
+export function checkJobInPool(task: JobCheckTask): Promise<string[]> {
+  return runInPool(CHECK_JOB_WORKER_FILE, task, checkJobInProcess)
 }
 
 async function runInPool<T, R>(file: string, task: T, inProcess: (task: T) => R, what: 'network' | 'file' = 'network'): Promise<R> {

@@ -14,6 +14,14 @@ export interface TemplateArray {
   spacing: number
 }
 
+/** A Touchstone file a template's `data` blocks name; it goes into the project with the network. */
+export interface TemplateFile {
+  /** File name in the project (`….sNp`), as the data blocks write it. */
+  name: string
+  /** The file's Touchstone text, generated afresh. */
+  text(): string
+}
+
 /** A ready-made network a project can start from. */
 export interface NetworkTemplate {
   /** Stable identifier (kebab-case). */
@@ -24,6 +32,8 @@ export interface NetworkTemplate {
   tags: string[]
   ports: TemplatePort[]
   array?: TemplateArray
+  /** Data files the document's `data` blocks name; created in the project unless it has them. */
+  files?: TemplateFile[]
   /** A fresh version-1.1 document with spec, block layout and, where useful, tunables and tolerances. */
   build(): NetworkDocument
 }

@@ -34,7 +34,7 @@ describe('template gallery', () => {
     await page.click('[data-testid="template-gallery-toggle"]')
     const card = page.locator('[data-testid="template-card-two-section-quadrature"]')
     await card.waitFor()
-    await expect.poll(() => page.locator('[data-testid^="template-card-"]').count()).toBe(5)
+    await expect.poll(() => page.locator('[data-testid^="template-card-"]').count()).toBe(6)
     await card.locator('summary').click()
     const spec = await card.locator('[data-testid="template-spec-two-section-quadrature"]').textContent()
     expect(spec).toContain('return loss at port 1 ≥ 20 dB')

@@ -203,6 +203,8 @@ const policy: Record<string, RouteCase> = {
       return { path: `${base}/jobs`, body: { kind: 'tolerance', trials: 10, seed: 1 } }
     },
   },
+  // The event stream stays open `seconds` (here 1) and then ends, so the call returns.
+  'GET /api/projects/:projectId/networks/:networkId/jobs/events': { rule: 'viewer', prepare: async f => ({ path: `${await jobsNetwork(f)}/jobs/events?seconds=1` }) },
   'GET /api/projects/:projectId/networks/:networkId/jobs/:jobId': { rule: 'viewer', prepare: async f => ({ path: `${await jobsNetwork(f)}/jobs/${await ownerJob(f)}` }) },
   'POST /api/projects/:projectId/networks/:networkId/jobs/:jobId/cancel': { rule: 'editor', prepare: async f => ({ path: `${await jobsNetwork(f)}/jobs/${await ownerJob(f)}/cancel` }) },
   'GET /api/projects/:projectId/substrates': { rule: 'viewer', prepare: async f => ({ path: `/api/projects/${f.projectId}/substrates` }) },

@@ -15,3 +15,12 @@ export interface PlotBand {
   high: number
   label: string
 }
+
+/** A band shaded between two curves over frequency (a trace's spread over a yield run). */
+export interface PlotFill {
+  label: string
+  low: ArrayLike<number | null>
+  high: ArrayLike<number | null>
+  /** Fill colour, translucent. */
+  colour: string
+}

@@ -21,3 +21,9 @@ export const PHASE_DASH = [6, 4] as const
 export function traceColour(n: number): string {
   return TRACE_COLOURS[((n % TRACE_COLOURS.length) + TRACE_COLOURS.length) % TRACE_COLOURS.length]!
 }
+
+/** A palette colour (`rgb(r, g, b)`) made translucent, for shaded bands; other colour forms pass unchanged. */
+export function withAlpha(colour: string, alpha: number): string {
+  const match = /^rgb\((\d+),\s*(\d+),\s*(\d+)\)$/.exec(colour)
+  return match ? `rgba(${match[1]}, ${match[2]}, ${match[3]}, ${alpha})` : colour
+}

@@ -1,6 +1,8 @@
 import type { NetworkDocument } from '~~/shared/network/types'
 import { GRID, kindSpec } from '../editor/blockCatalog'
+import { externalShape } from '../editor/externalTerminals'
 import { orientedSize, placeTerminal, type Rotation } from '../editor/geometry'
+import { portsFromFileName } from '~~/shared/touchstone/read'
 
 /** How a block is drawn in a thumbnail: a reduced form of its canvas symbol. */
 export type ThumbnailShape = 'tag' | 'ribbon' | 'square' | 'ring' | 'fork' | 'box'
@@ -38,7 +40,9 @@ export function schematicThumbnail(document: Pick<NetworkDocument, 'blocks' | 'w
   const blocks: ThumbnailBlock[] = []
   const terminals = new Map<string, { x: number; y: number }>()
   for (const block of document.blocks) {
-    const spec = kindSpec(block.type)
+    // A data block's terminals are its file's ports, counted from the `.sNp` name.
+    const filePorts = block.type === 'data' && typeof block.params.file === 'string' ? portsFromFileName(block.params.file) : undefined
+    const spec = kindSpec(block.type) ?? (filePorts ? externalShape({ count: filePorts }) : undefined)
     if (!spec || !block.layout) continue
     const rotation = (((block.layout.rotation ?? 0) % 360 + 360) % 360) as Rotation
     const orientation = { rotation, flip: block.layout.flip ?? false }

@@ -4,7 +4,7 @@ import { beamWeights } from '../../../shared/beams/beam-weights'
 import { parseNetworkDocument, resolveSpec } from '../../../shared/network/index'
 import { specMeets } from '../../../shared/rf/spec-meets'
 import { solveDocument } from '../../../shared/solver/index'
-import { TEMPLATES, findTemplate } from '../../../shared/templates/index'
+import { TEMPLATES, findTemplate, templateDataResolver } from '../../../shared/templates/index'
 import { prepareTuning, resolveTolerances, resolveTunables } from '../../../shared/tuning/index'
 
 // Trade terms and S-parameter-like names are not block ids of ours.
@@ -12,6 +12,8 @@ const TRADE_IDS = /^(TL|MS|RL|S\d\d)/i
 
 describe.each(TEMPLATES.map(t => [t.slug, t] as const))('template %s', (_slug, template) => {
   const document = template.build()
+  // Templates with data blocks bring their own files.
+  const resolveData = templateDataResolver(template)
 
   it('is a valid version-1.1 document with a layout for every block and unique ids', () => {
     const parsed = parseNetworkDocument(document)
@@ -35,7 +37,7 @@ describe.each(TEMPLATES.map(t => [t.slug, t] as const))('template %s', (_slug, t
     expect(resolved?.ok).toBe(true)
     if (!resolved?.ok) return
     const center = resolved.spec.center
-    const solved = solveDocument(document, { sweep: { start: center, stop: center, points: 1 } })
+    const solved = solveDocument(document, { sweep: { start: center, stop: center, points: 1 }, resolveData })
     expect(solved.ok, solved.ok ? '' : solved.problems.map(p => p.message).join('\n')).toBe(true)
     if (!solved.ok) return
     const check = specMeets(solved.result, { center, conditions: resolved.spec.conditions })
@@ -45,12 +47,12 @@ describe.each(TEMPLATES.map(t => [t.slug, t] as const))('template %s', (_slug, t
   })
 
   it('meets its own spec over its band (the contract’s "meets")', () => {
-    const prepared = prepareTuning(document)
+    const prepared = prepareTuning(document, { resolveData })
     expect(prepared.ok, prepared.ok ? '' : prepared.problems.map(p => p.message).join('\n')).toBe(true)
   })
 
   it('names tunables and tolerances that resolve', () => {
-    const prepared = prepareTuning(document)
+    const prepared = prepareTuning(document, { resolveData })
     if (!prepared.ok) throw new Error(prepared.problems.map(p => p.message).join('\n'))
     expect(document.tolerances, 'every template has tolerances').toBeDefined()
     const spreads = resolveTolerances(prepared.setup)
@@ -63,8 +65,8 @@ describe.each(TEMPLATES.map(t => [t.slug, t] as const))('template %s', (_slug, t
 })
 
 describe('template index', () => {
-  it('has the five templates with one-line descriptions and tags', () => {
-    expect(TEMPLATES.map(t => t.slug)).toEqual(['quadrature-split', 'two-section-quadrature', 'ring-hybrid-feed', 'corporate-divider-1x4', 'beam-matrix-4x4'])
+  it('has the six templates with one-line descriptions and tags', () => {
+    expect(TEMPLATES.map(t => t.slug)).toEqual(['quadrature-split', 'two-section-quadrature', 'ring-hybrid-feed', 'corporate-divider-1x4', 'beam-matrix-4x4', 'balanced-amplifier'])
     for (const t of TEMPLATES) {
       expect(t.description).not.toMatch(/\n/)
       expect(t.tags.length).toBeGreaterThan(0)

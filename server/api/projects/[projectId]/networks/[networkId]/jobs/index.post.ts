@@ -1,6 +1,6 @@
 import { JOB_CHUNK_TRIALS, submitJobSchema } from '#shared/schemas/jobs'
 import { Job, Network } from '~~/server/database/models'
-import { prepareTuning, resolveTolerances, resolveTunables } from '#shared/tuning/index'
+import { loadProjectInputs } from '~~/server/jobs/project-inputs'
 import type { JobDto, JobParameters } from '#shared/types/jobs'
 
 /** Runs a project may have waiting or running at once; more would let one team crowd out the rest. */
@@ -17,16 +17,12 @@ export default defineEventHandler(async (event): Promise<JobDto> => {
   await requireMergedLiveState(network.id)
   const live = await Network.findByPk(network.id, { attributes: ['id', 'document'] })
   const document = live?.document ?? network.document
-  // Problems with the document are named now, not after a worker has picked the run up.
-  const networks = new Map(await projectNetworksByRef(project.id))
-  const prepared = prepareTuning(document, { resolveSubnetwork: ref => networks.get(ref) })
-  const problems = !prepared.ok
-    ? prepared.problems
-    : body.kind === 'tolerance'
-      ? (r => (r.ok ? [] : r.problems))(resolveTolerances(prepared.setup))
-      : (r => (r.ok ? [] : r.problems))(resolveTunables(prepared.setup))
+  // Problems with the document are named now, not after a worker has picked the run up: the same preparation
+  // as every chunk (subnetworks, data files read from the project), in the solve pool's budget.
+  const inputs = await loadProjectInputs(project.id, document)
+  const problems = await checkJobInPool({ kind: body.kind, document, ...inputs })
   if (problems.length) {
-    throw createError({ statusCode: 422, message: `This network cannot be sent for a ${body.kind === 'tolerance' ? 'tolerance run' : 'optimisation'}: ${problems.slice(0, 5).map(p => p.message).join('; ')}` })
+    throw createError({ statusCode: 422, message: `This network cannot be sent for a ${body.kind === 'tolerance' ? 'tolerance run' : 'optimisation'}: ${problems.slice(0, 5).join('; ')}` })
   }
   const unfinished = await Job.count({ where: { projectId: project.id, state: ['queued', 'running'] } })
   if (unfinished >= MAX_UNFINISHED_PER_PROJECT) {
