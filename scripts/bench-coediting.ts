@@ -8,7 +8,14 @@
  * memory, errors (closed connections, missing deliveries, server warnings),
  * the load generator's own CPU use and the rows the database wrote.
  *
- *   PORTWRIGHT_BUILD_NAME=live npx tsx scripts/bench-coediting.ts [--clients 50] [--rate 20] [--seconds 60] [--instances 1] [--profile]
+ *   PORTWRIGHT_BUILD_NAME=live npx tsx scripts/bench-coediting.ts [--clients 50] [--rate 20] [--seconds 60] [--instances 1] [--writers N] [--light] [--profile]
+ *
+ * --writers N: only the first N clients edit (all of them by default); the
+ * others only receive. --light: those receiving-only clients are bare
+ * websockets that keep no Yjs document (they find each edit's value in the
+ * bytes they receive and renew a presence every 15 s, as a browser does), so
+ * that hundreds of them cost the load generator little: the server does the
+ * same work for them as for full clients.
  *
  * PORTWRIGHT_BENCH_PORT (default 5960; instance k listens on port + k) and
  * PORTWRIGHT_BENCH_DB_PORT (default 56360) choose the ports. --profile runs the
@@ -23,6 +30,8 @@ import type { ChildProcess } from 'node:child_process'
 import pg from 'pg'
 import * as Y from 'yjs'
 import { WebsocketProvider } from 'y-websocket'
+import WebSocket from 'ws'
+import * as encoding from 'lib0/encoding'
 import { ensureCluster, startCluster, stopCluster, ensureDatabase, databaseUrl, type Cluster } from './lib/postgres'
 import { prepareDatabase } from './lib/database-setup'
 import { buildIfStale } from './lib/build'
@@ -46,7 +55,9 @@ const profile = process.argv.includes('--profile')
  * network: past 100 clients, two clients share one (they write it
  * `clients` updates apart, so never at the same time).
  */
-const variableSlots = Math.min(clientCount, 100)
+const writerCount = Math.min(clientCount, Math.max(1, Math.floor(arg('writers', clientCount))))
+const light = process.argv.includes('--light')
+const variableSlots = Math.min(writerCount, 100)
 const root = resolve(import.meta.dirname, '..')
 const appPort = Number(process.env.PORTWRIGHT_BENCH_PORT ?? 5960)
 const dataDir = resolve(root, '.data', `bench-coediting${process.env.PORTWRIGHT_BUILD_NAME ? `-${process.env.PORTWRIGHT_BUILD_NAME}` : ''}`)
@@ -126,7 +137,43 @@ async function main(): Promise<void> {
     const docs: Y.Doc[] = []
     const closes: string[] = []
     let started = false
+    const lightSockets: WebSocket[] = []
+    const presenceTimers: Array<ReturnType<typeof setInterval>> = []
     for (let i = 0; i < clientCount; i++) {
+      if (light && i >= writerCount) {
+        const home = bases[i % instanceCount]!
+        const socket = new WebSocket(`${home.replace('http', 'ws')}/live/networks/${network.id}`, { headers: { cookie, origin: home } })
+        socket.binaryType = 'nodebuffer'
+        socket.on('message', (data: Buffer) => {
+          const received = performance.now()
+          // An edit's value travels as a Yjs string: type byte 119 ('w'), its length, then the text.
+          const text = data.toString('latin1')
+          for (const m of text.matchAll(/w([\s\S])(\d+:\d+)/g)) {
+            if (m[1]!.charCodeAt(0) !== m[2]!.length) continue
+            const t0 = sentAt.get(m[2]!)
+            if (t0 !== undefined) latencies.push(received - t0)
+          }
+        })
+        socket.on('close', (code: number, reason: Buffer) => { if (started) closes.push(`client ${i}: ${code} ${reason.toString()}`.trim()) })
+        const clientId = 1_000_000 + i
+        let clock = 0
+        const presence = () => {
+          if (socket.readyState !== WebSocket.OPEN) return
+          const update = encoding.createEncoder()
+          encoding.writeVarUint(update, 1)
+          encoding.writeVarUint(update, clientId)
+          encoding.writeVarUint(update, ++clock)
+          encoding.writeVarString(update, '{}')
+          const message = encoding.createEncoder()
+          encoding.writeVarUint(message, 1) // awareness
+          encoding.writeVarUint8Array(message, encoding.toUint8Array(update))
+          socket.send(encoding.toUint8Array(message))
+        }
+        socket.on('open', presence)
+        presenceTimers.push(setInterval(presence, 15_000))
+        lightSockets.push(socket)
+        continue
+      }
       const doc = new Y.Doc()
       const home = bases[i % instanceCount]!
       const provider = new WebsocketProvider(`${home.replace('http', 'ws')}/live/networks`, network.id, doc, {
@@ -157,7 +204,7 @@ async function main(): Promise<void> {
       providers.push(provider)
     }
     const deadline = Date.now() + 20_000
-    while (!providers.every(p => p.synced)) {
+    while (!providers.every(p => p.synced) || !lightSockets.every(s => s.readyState === WebSocket.OPEN)) {
       if (Date.now() > deadline) throw new Error('clients did not sync within 20 s')
       await new Promise(r => setTimeout(r, 50))
     }
@@ -180,7 +227,7 @@ async function main(): Promise<void> {
     for (let n = 0; n < total; n++) {
       const wait = start + n * interval - performance.now()
       if (wait > 0) await new Promise(r => setTimeout(r, wait))
-      const i = n % clientCount
+      const i = n % writerCount
       const doc = docs[i]!
       const token = `${i}:${n}`
       const next = readNetwork(doc)
@@ -197,6 +244,8 @@ async function main(): Promise<void> {
     started = false
     const expected = total * (clientCount - 1)
     for (const p of providers) p.destroy()
+    for (const t of presenceTimers) clearInterval(t)
+    for (const s of lightSockets) s.close()
     // The last client out triggers the final merge; give it a moment before reading the counters.
     await new Promise(r => setTimeout(r, 3000))
     const after = await tableCounters(db)
@@ -218,6 +267,8 @@ async function main(): Promise<void> {
     const result = {
       instances: instanceCount,
       clients: clientCount,
+      writers: writerCount,
+      receivers: light ? 'light' : 'full',
       updatesPerSecond: rate,
       seconds,
       updatesSent: total,
@@ -236,7 +287,7 @@ async function main(): Promise<void> {
         networksUpdated: delta('networks', 'updated'),
       },
     }
-    console.log(`${clientCount} clients on ${instanceCount} instance(s), ${rate} updates/s for ${seconds} s`)
+    console.log(`${clientCount} clients (${writerCount} editing; ${light && writerCount < clientCount ? 'the others bare websockets' : 'all Yjs clients'}) on ${instanceCount} instance(s), ${rate} updates/s for ${seconds} s`)
     console.log(`latency send → other clients: p50 ${result.latencyMs.p50} ms, p95 ${result.latencyMs.p95} ms, p99 ${result.latencyMs.p99} ms, max ${result.latencyMs.max} ms (${result.deliveries} of ${expected} deliveries)`)
     console.log(`errors: ${result.errors.connectionsClosed} connections closed, ${result.errors.deliveriesMissing} deliveries missing, ${result.errors.serverWarnings} server warnings`)
     for (const w of serverWarnings.slice(0, 5)) console.log(`  ${w}`)
