@@ -13,7 +13,7 @@
  */
 import { loadavg } from 'node:os'
 import type { Page } from 'playwright-core'
-import { benchProject, createNetwork, deleteNetwork, freshContext, launchBenchBrowser, percentile, signIn } from './lib/bench-browser'
+import { benchProject, createNetwork, deleteNetwork, freshContext, waitInPage, launchBenchBrowser, percentile, signIn } from './lib/bench-browser'
 
 const base = (process.env.PORTWRIGHT_URL ?? 'http://127.0.0.1:3000').replace(/\/$/, '')
 function arg(name: string, fallback: number): number {
@@ -120,7 +120,7 @@ async function main() {
     try {
       await page.goto(`${base}/projects/${project.id}/networks/${networkId}`)
       await page.waitForSelector('[data-testid="results-fresh"]', { timeout: 120_000 })
-      await page.waitForFunction(`document.querySelectorAll('.vue-flow__node').length > 0`, undefined, { timeout: 60_000 })
+      await waitInPage(page, `document.querySelectorAll('.vue-flow__node').length > 0`, 60_000)
       await page.waitForTimeout(1000)
       const box = (await page.locator('[data-testid="canvas"]').boundingBox())!
       const rendered = await page.evaluate(`document.querySelectorAll('.vue-flow__node').length`) as number

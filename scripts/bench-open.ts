@@ -11,7 +11,7 @@
  */
 import { loadavg } from 'node:os'
 import type { Page } from 'playwright-core'
-import { benchProject, createNetwork, deleteNetwork, freshContext, launchBenchBrowser, percentile, signIn } from './lib/bench-browser'
+import { benchProject, createNetwork, deleteNetwork, freshContext, waitInPage, launchBenchBrowser, percentile, signIn } from './lib/bench-browser'
 
 const base = (process.env.PORTWRIGHT_URL ?? 'http://127.0.0.1:3000').replace(/\/$/, '')
 const runsArg = process.argv.indexOf('--runs')
@@ -37,7 +37,7 @@ interface Visit { firstPlotMs: number, responseEndMs: number, domContentLoadedMs
 /** Opens the editor in `page` and reads the navigation's timings once the first plot is drawn. */
 async function visit(page: Page, url: string): Promise<Visit> {
   await page.goto(url, { waitUntil: 'commit' })
-  await page.waitForFunction(`performance.getEntriesByName('portwright:plot-drawn').length > 0`, undefined, { timeout: 60_000, polling: 20 })
+  await waitInPage(page, `performance.getEntriesByName('portwright:plot-drawn').length > 0`, 60_000)
   // Mark times are from the navigation's start (the page's time origin).
   return await page.evaluate(`(() => {
     const nav = performance.getEntriesByType('navigation')[0]

@@ -1,6 +1,3 @@
-import { mkdtempSync, rmSync } from 'node:fs'
-import { tmpdir } from 'node:os'
-import { join } from 'node:path'
 import { chromium, type Browser, type BrowserContext, type Page } from 'playwright-core'
 
 /** Demo account the browser benchmarks sign in as (seeded only for a loopback app). */
@@ -45,16 +42,23 @@ export async function deleteNetwork(page: Page, base: string, projectId: string,
   await page.request.delete(`${base}/api/projects/${projectId}/networks/${networkId}`, { headers: { origin: base } })
 }
 
+/**
+ * Polls an expression in the page every 10 ms until it is true. (Playwright's
+ * waitForFunction evaluates its predicate with eval, which the app's content
+ * security policy forbids; page.evaluate does not.)
+ */
+export async function waitInPage(page: Page, expression: string, timeoutMs: number): Promise<void> {
+  const end = Date.now() + timeoutMs
+  while (!(await page.evaluate(expression))) {
+    if (Date.now() > end) throw new Error(`timed out after ${timeoutMs} ms waiting for ${expression}`)
+    await new Promise(r => setTimeout(r, 10))
+  }
+}
+
 /** Interpolated percentile of an ascending list, p in 0…1. */
 export function percentile(sorted: number[], p: number): number {
   if (!sorted.length) return Number.NaN
   const at = (sorted.length - 1) * p
   const lo = Math.floor(at)
   return sorted[lo]! + (sorted[Math.min(lo + 1, sorted.length - 1)]! - sorted[lo]!) * (at - lo)
-}
-
-/** A scratch profile folder for a persistent context, removed by the returned function. */
-export function scratchProfile(): { dir: string, remove: () => void } {
-  const dir = mkdtempSync(join(tmpdir(), 'portwright-bench-'))
-  return { dir, remove: () => rmSync(dir, { recursive: true, force: true }) }
 }
