@@ -1,28 +1,44 @@
 /**
  * Load benchmark of live co-editing (not a test: it prints figures). Starts its
- * own PostgreSQL cluster (safe defaults, fsync on) and the built app, opens 50
- * y-websocket clients on one network and has them edit at 20 updates per second
- * in total for 60 s on loopback. Reports the latency from an edit at one client
- * to its arrival at each of the others (p50, p95, max), the server's resident
- * memory, and the rows the database wrote.
+ * own PostgreSQL cluster (safe defaults, fsync on) and the built app (one or
+ * more instances on one database), opens y-websocket clients on one network,
+ * spread over the instances in turn, and has them edit at a total rate for a
+ * while on loopback. Reports the latency from an edit at one client to its
+ * arrival at each of the others (p50, p95, p99, max), each instance's resident
+ * memory, errors (closed connections, missing deliveries, server warnings),
+ * the load generator's own CPU use and the rows the database wrote.
  *
- *   PORTWRIGHT_BUILD_NAME=live npx tsx scripts/bench-coediting.ts [--clients 50] [--rate 20] [--seconds 60]
+ *   PORTWRIGHT_BUILD_NAME=live npx tsx scripts/bench-coediting.ts [--clients 50] [--rate 20] [--seconds 60] [--instances 1] [--writers N] [--light] [--profile]
  *
- * PORTWRIGHT_BENCH_PORT (default 5960) and PORTWRIGHT_BENCH_DB_PORT (default 56360) choose the ports.
+ * --writers N: only the first N clients edit (all of them by default); the
+ * others only receive. --light: those receiving-only clients are bare
+ * websockets that keep no Yjs document (they find each edit's value in the
+ * bytes they receive and renew a presence every 15 s, as a browser does), so
+ * that hundreds of them cost the load generator little: the server does the
+ * same work for them as for full clients.
+ *
+ * PORTWRIGHT_BENCH_PORT (default 5960; instance k listens on port + k) and
+ * PORTWRIGHT_BENCH_DB_PORT (default 56360) choose the ports. --profile runs the
+ * servers under `node --cpu-prof` and prints where their CPU time went.
  */
 import { readFileSync, rmSync } from 'node:fs'
 import { randomBytes } from 'node:crypto'
 import { loadavg } from 'node:os'
 import { resolve } from 'node:path'
+import { monitorEventLoopDelay } from 'node:perf_hooks'
+import type { ChildProcess } from 'node:child_process'
 import pg from 'pg'
 import * as Y from 'yjs'
 import { WebsocketProvider } from 'y-websocket'
+import WebSocket from 'ws'
+import * as encoding from 'lib0/encoding'
 import { ensureCluster, startCluster, stopCluster, ensureDatabase, databaseUrl, type Cluster } from './lib/postgres'
 import { prepareDatabase } from './lib/database-setup'
 import { buildIfStale } from './lib/build'
 import { startServer, stopProcess } from './lib/server-process'
 import { readNetwork, writeNetwork } from '../shared/live/network-ydoc'
 import { webSocketWithHeaders } from '../tests/support/live'
+import { summariseCpuProfiles } from './lib/cpu-profile-summary'
 
 function arg(name: string, fallback: number): number {
   const at = process.argv.indexOf(`--${name}`)
@@ -32,11 +48,23 @@ function arg(name: string, fallback: number): number {
 const clientCount = arg('clients', 50)
 const rate = arg('rate', 20)
 const seconds = arg('seconds', 60)
+const instanceCount = Math.max(1, Math.floor(arg('instances', 1)))
+const profile = process.argv.includes('--profile')
+/**
+ * Each client writes its own variable, but the contract allows at most 200 per
+ * network: past 100 clients, two clients share one (they write it
+ * `clients` updates apart, so never at the same time).
+ */
+const writerCount = Math.min(clientCount, Math.max(1, Math.floor(arg('writers', clientCount))))
+const light = process.argv.includes('--light')
+const variableSlots = Math.min(writerCount, 100)
 const root = resolve(import.meta.dirname, '..')
 const appPort = Number(process.env.PORTWRIGHT_BENCH_PORT ?? 5960)
 const dataDir = resolve(root, '.data', `bench-coediting${process.env.PORTWRIGHT_BUILD_NAME ? `-${process.env.PORTWRIGHT_BUILD_NAME}` : ''}`)
 const cluster: Cluster = { dataDir: resolve(dataDir, 'postgres'), port: Number(process.env.PORTWRIGHT_BENCH_DB_PORT ?? 56360) }
-const base = `http://127.0.0.1:${appPort}`
+const bases = Array.from({ length: instanceCount }, (_, k) => `http://127.0.0.1:${appPort + k}`)
+const base = bases[0]!
+const profileDir = resolve(dataDir, 'cpu-profiles')
 
 function percentile(sorted: number[], p: number): number {
   if (!sorted.length) return NaN
@@ -81,15 +109,24 @@ async function main(): Promise<void> {
   rmSync(dataDir, { recursive: true, force: true })
   ensureCluster(cluster)
   await startCluster(cluster)
-  let server: Awaited<ReturnType<typeof startServer>> | undefined
+  const servers: ChildProcess[] = []
   const providers: WebsocketProvider[] = []
   try {
     await ensureDatabase(cluster, 'portwright')
     const url = databaseUrl(cluster, 'portwright')
     await prepareDatabase(url, { seed: true })
     buildIfStale(root)
-    server = await startServer(root, { NUXT_DATABASE_URL: url, NUXT_SESSION_PASSWORD: randomBytes(32).toString('base64url') }, appPort)
-    const pid = server.pid!
+    // One session secret for all instances: a cookie from one is good on the others, as behind a load balancer.
+    const env = { NUXT_DATABASE_URL: url, NUXT_SESSION_PASSWORD: randomBytes(32).toString('base64url') }
+    const serverWarnings: string[] = []
+    const nodeArgs = profile ? ['--cpu-prof', `--cpu-prof-dir=${profileDir}`] : []
+    for (let k = 0; k < instanceCount; k++) {
+      servers.push(await startServer(root, env, appPort + k, '127.0.0.1', {
+        nodeArgs,
+        onStderr: (line) => { if (/\[live\]|error/i.test(line)) serverWarnings.push(`instance ${k + 1}: ${line}`) },
+      }))
+    }
+    const pids = servers.map(s => s.pid!)
     const cookie = await signIn()
     const projects = await api<Array<{ id: string, name: string }>>(cookie, '/api/projects')
     const project = projects.find(p => p.name.startsWith('Beam-switch')) ?? projects[0]!
@@ -98,14 +135,56 @@ async function main(): Promise<void> {
     const sentAt = new Map<string, number>()
     const latencies: number[] = []
     const docs: Y.Doc[] = []
+    const closes: string[] = []
+    let started = false
+    const lightSockets: WebSocket[] = []
+    const presenceTimers: Array<ReturnType<typeof setInterval>> = []
     for (let i = 0; i < clientCount; i++) {
+      if (light && i >= writerCount) {
+        const home = bases[i % instanceCount]!
+        const socket = new WebSocket(`${home.replace('http', 'ws')}/live/networks/${network.id}`, { headers: { cookie, origin: home } })
+        socket.binaryType = 'nodebuffer'
+        socket.on('message', (data: Buffer) => {
+          const received = performance.now()
+          // An edit's value travels as a Yjs string: type byte 119 ('w'), its length, then the text.
+          const text = data.toString('latin1')
+          for (const m of text.matchAll(/w([\s\S])(\d+:\d+)/g)) {
+            if (m[1]!.charCodeAt(0) !== m[2]!.length) continue
+            const t0 = sentAt.get(m[2]!)
+            if (t0 !== undefined) latencies.push(received - t0)
+          }
+        })
+        socket.on('close', (code: number, reason: Buffer) => { if (started) closes.push(`client ${i}: ${code} ${reason.toString()}`.trim()) })
+        const clientId = 1_000_000 + i
+        let clock = 0
+        const presence = () => {
+          if (socket.readyState !== WebSocket.OPEN) return
+          const update = encoding.createEncoder()
+          encoding.writeVarUint(update, 1)
+          encoding.writeVarUint(update, clientId)
+          encoding.writeVarUint(update, ++clock)
+          encoding.writeVarString(update, '{}')
+          const message = encoding.createEncoder()
+          encoding.writeVarUint(message, 1) // awareness
+          encoding.writeVarUint8Array(message, encoding.toUint8Array(update))
+          socket.send(encoding.toUint8Array(message))
+        }
+        socket.on('open', presence)
+        presenceTimers.push(setInterval(presence, 15_000))
+        lightSockets.push(socket)
+        continue
+      }
       const doc = new Y.Doc()
-      const provider = new WebsocketProvider(`${base.replace('http', 'ws')}/live/networks`, network.id, doc, {
-        WebSocketPolyfill: webSocketWithHeaders({ cookie, origin: base }) as unknown as typeof globalThis.WebSocket,
+      const home = bases[i % instanceCount]!
+      const provider = new WebsocketProvider(`${home.replace('http', 'ws')}/live/networks`, network.id, doc, {
+        WebSocketPolyfill: webSocketWithHeaders({ cookie, origin: home }) as unknown as typeof globalThis.WebSocket,
         disableBc: true,
       })
+      provider.on('connection-close', (event: { code: number, reason: string } | null) => {
+        if (started) closes.push(`client ${i}: ${event?.code ?? '?'} ${event?.reason ?? ''}`.trim())
+      })
       const seen = new Map<string, unknown>()
-      const own = `c${i}`
+      const ownPrefix = `${i}:`
       doc.on('update', (_u: Uint8Array, origin: unknown) => {
         if (origin !== provider) return
         const received = performance.now()
@@ -113,9 +192,10 @@ async function main(): Promise<void> {
         // the measurement should cost the load generator as little as possible.
         const vars = ((doc.getMap('network').get('v') as Y.Map<unknown>).get('variables') as Y.Map<unknown>).get('v') as Y.Map<unknown>
         for (const [key, value] of vars.entries()) {
-          // A client's own variable changed locally; counting it here would time the next remote update instead.
-          if (key === own || !key.startsWith('c') || seen.get(key) === value) continue
+          if (!key.startsWith('c') || seen.get(key) === value) continue
           seen.set(key, value)
+          // A client's own value, written locally; counting it here would time the next remote update instead.
+          if (String(value).startsWith(ownPrefix)) continue
           const t0 = sentAt.get(String(value))
           if (t0 !== undefined) latencies.push(received - t0)
         }
@@ -124,15 +204,22 @@ async function main(): Promise<void> {
       providers.push(provider)
     }
     const deadline = Date.now() + 20_000
-    while (!providers.every(p => p.synced)) {
+    while (!providers.every(p => p.synced) || !lightSockets.every(s => s.readyState === WebSocket.OPEN)) {
       if (Date.now() > deadline) throw new Error('clients did not sync within 20 s')
       await new Promise(r => setTimeout(r, 50))
     }
     const db = new pg.Client({ connectionString: url })
     await db.connect()
     const before = await tableCounters(db)
-    const rss: number[] = [rssMiB(pid)]
-    const memTimer = setInterval(() => rss.push(rssMiB(pid)), 1000)
+    const rss: number[][] = pids.map(pid => [rssMiB(pid)])
+    const memTimer = setInterval(() => pids.forEach((pid, k) => rss[k]!.push(rssMiB(pid))), 1000)
+    const loadAtStart = loadavg()
+    // The clients share this process: its own CPU use and event-loop delay are part of every latency measured.
+    const loopDelay = monitorEventLoopDelay({ resolution: 10 })
+    loopDelay.enable()
+    const cpuAtStart = process.cpuUsage()
+    const wallAtStart = performance.now()
+    started = true
 
     const total = Math.round(rate * seconds)
     const interval = 1000 / rate
@@ -140,18 +227,25 @@ async function main(): Promise<void> {
     for (let n = 0; n < total; n++) {
       const wait = start + n * interval - performance.now()
       if (wait > 0) await new Promise(r => setTimeout(r, wait))
-      const i = n % clientCount
+      const i = n % writerCount
       const doc = docs[i]!
       const token = `${i}:${n}`
       const next = readNetwork(doc)
-      next.variables = { ...next.variables, [`c${i}`]: token }
+      next.variables = { ...next.variables, [`c${i % variableSlots}`]: token }
       sentAt.set(token, performance.now())
       doc.transact(() => writeNetwork(doc, next))
     }
     await new Promise(r => setTimeout(r, 2000))
     clearInterval(memTimer)
+    loopDelay.disable()
+    const cpu = process.cpuUsage(cpuAtStart)
+    const generatorCpuShare = (cpu.user + cpu.system) / 1000 / (performance.now() - wallAtStart)
+    const loadAtEnd = loadavg()
+    started = false
     const expected = total * (clientCount - 1)
     for (const p of providers) p.destroy()
+    for (const t of presenceTimers) clearInterval(t)
+    for (const s of lightSockets) s.close()
     // The last client out triggers the final merge; give it a moment before reading the counters.
     await new Promise(r => setTimeout(r, 3000))
     const after = await tableCounters(db)
@@ -171,15 +265,21 @@ async function main(): Promise<void> {
     latencies.sort((a, b) => a - b)
     const delta = (table: string, field: 'inserted' | 'updated' | 'deleted') => (after[table]?.[field] ?? 0) - (before[table]?.[field] ?? 0)
     const result = {
+      instances: instanceCount,
       clients: clientCount,
+      writers: writerCount,
+      receivers: light ? 'light' : 'full',
       updatesPerSecond: rate,
       seconds,
       updatesSent: total,
       deliveries: latencies.length,
       deliveriesExpected: expected,
-      latencyMs: { p50: +percentile(latencies, 50).toFixed(2), p95: +percentile(latencies, 95).toFixed(2), max: +(latencies.at(-1) ?? NaN).toFixed(2) },
+      latencyMs: { p50: +percentile(latencies, 50).toFixed(2), p95: +percentile(latencies, 95).toFixed(2), p99: +percentile(latencies, 99).toFixed(2), max: +(latencies.at(-1) ?? NaN).toFixed(2) },
+      errors: { connectionsClosed: closes.length, deliveriesMissing: expected - latencies.length, serverWarnings: serverWarnings.length },
+      loadGenerator: { cpuShareOfOneCore: +generatorCpuShare.toFixed(2), eventLoopDelayMs: { p50: +(loopDelay.percentile(50) / 1e6).toFixed(1), p99: +(loopDelay.percentile(99) / 1e6).toFixed(1) } },
+      loadAverage: { start: loadAtStart.map(l => +l.toFixed(2)), end: loadAtEnd.map(l => +l.toFixed(2)) },
       commitMs: { p50: +percentile(commits, 50).toFixed(2), p95: +percentile(commits, 95).toFixed(2) },
-      serverRssMiB: { start: +rss[0]!.toFixed(1), peak: +Math.max(...rss).toFixed(1), end: +rss.at(-1)!.toFixed(1) },
+      serverRssMiB: rss.map(r => ({ start: +r[0]!.toFixed(1), peak: +Math.max(...r).toFixed(1), end: +r.at(-1)!.toFixed(1) })),
       databaseRows: {
         updateLogInserted: delta('network_updates', 'inserted'),
         updateLogDeleted: delta('network_updates', 'deleted'),
@@ -187,9 +287,14 @@ async function main(): Promise<void> {
         networksUpdated: delta('networks', 'updated'),
       },
     }
-    console.log(`latency send → other clients: p50 ${result.latencyMs.p50} ms, p95 ${result.latencyMs.p95} ms, max ${result.latencyMs.max} ms (${result.deliveries} of ${expected} deliveries)`)
-    console.log(`one committed insert from this client: p50 ${result.commitMs.p50} ms, p95 ${result.commitMs.p95} ms; load average ${loadavg().map(l => l.toFixed(1)).join(' ')}`)
-    console.log(`server memory (RSS): ${result.serverRssMiB.start} MiB at start, ${result.serverRssMiB.peak} MiB peak, ${result.serverRssMiB.end} MiB at end`)
+    console.log(`${clientCount} clients (${writerCount} editing; ${light && writerCount < clientCount ? 'the others bare websockets' : 'all Yjs clients'}) on ${instanceCount} instance(s), ${rate} updates/s for ${seconds} s`)
+    console.log(`latency send → other clients: p50 ${result.latencyMs.p50} ms, p95 ${result.latencyMs.p95} ms, p99 ${result.latencyMs.p99} ms, max ${result.latencyMs.max} ms (${result.deliveries} of ${expected} deliveries)`)
+    console.log(`errors: ${result.errors.connectionsClosed} connections closed, ${result.errors.deliveriesMissing} deliveries missing, ${result.errors.serverWarnings} server warnings`)
+    for (const w of serverWarnings.slice(0, 5)) console.log(`  ${w}`)
+    for (const c of closes.slice(0, 5)) console.log(`  ${c}`)
+    console.log(`one committed insert from this client: p50 ${result.commitMs.p50} ms, p95 ${result.commitMs.p95} ms`)
+    console.log(`load average: ${result.loadAverage.start.join(' ')} at start, ${result.loadAverage.end.join(' ')} at end; load generator (all clients, one process): ${Math.round(100 * generatorCpuShare)} % of one core, event-loop delay p99 ${result.loadGenerator.eventLoopDelayMs.p99} ms`)
+    result.serverRssMiB.forEach((r, k) => console.log(`server ${k + 1} memory (RSS): ${r.start} MiB at start, ${r.peak} MiB peak, ${r.end} MiB at end`))
     console.log(`database rows: ${result.databaseRows.updateLogInserted} update-log inserts, ${result.databaseRows.updateLogDeleted} deleted by merges, ${result.databaseRows.liveStateUpdated} state merges, ${result.databaseRows.networksUpdated} JSON document writes`)
     console.log(JSON.stringify(result))
   } finally {
@@ -198,7 +303,8 @@ async function main(): Promise<void> {
       p.destroy()
       p.awareness.destroy()
     }
-    if (server) await stopProcess(server)
+    await Promise.all(servers.map(s => stopProcess(s, 15_000)))
+    if (profile) summariseCpuProfiles(profileDir)
     stopCluster(cluster)
   }
 }

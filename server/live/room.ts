@@ -75,7 +75,9 @@ export class LiveRoom {
   private mergeTimer: ReturnType<typeof setTimeout> | null = null
   private merging: Promise<void> = Promise.resolve()
   /** Counters for logs and the benchmark. */
-  readonly stats = { accepted: 0, dropped: 0, refused: 0 }
+  readonly stats = { accepted: 0, dropped: 0, refused: 0, catchUps: 0 }
+  private catchingUp: Promise<void> | null = null
+  private catchUpAgain = false
 
   constructor(readonly networkId: string, private readonly options: RoomOptions) {
     // The server is no participant: it shows no presence of its own.
@@ -286,8 +288,32 @@ export class LiveRoom {
     else await this.catchUp()
   }
 
-  /** Reads the stored state and every logged update: what notifications may have missed while unsubscribed. */
-  async catchUp(): Promise<void> {
+  /**
+   * Reads the stored state and every logged update: what notifications may have
+   * missed while unsubscribed. One read at a time: callers during a read share
+   * one more read after it (a room that fell behind a merge would otherwise
+   * start a full read for every update it was notified of, and fall further behind).
+   */
+  catchUp(): Promise<void> {
+    if (this.catchingUp) {
+      this.catchUpAgain = true
+      return this.catchingUp
+    }
+    this.catchingUp = (async () => {
+      try {
+        do {
+          this.catchUpAgain = false
+          this.stats.catchUps++
+          await this.readStored()
+        } while (this.catchUpAgain)
+      } finally {
+        this.catchingUp = null
+      }
+    })()
+    return this.catchingUp
+  }
+
+  private async readStored(): Promise<void> {
     if (!(await this.ready)) return
     const stored = await loadLiveState(this.networkId)
     if (!stored) return
