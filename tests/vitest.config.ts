@@ -18,7 +18,8 @@ export default defineConfig({
     projects: [
       {
         extends: true,
-        test: { name: 'unit', include: ['tests/unit/**/*.test.ts'], environment: 'node' },
+        // Fuzz and sweep tests take a few seconds alone and several times that on a loaded machine.
+        test: { name: 'unit', include: ['tests/unit/**/*.test.ts'], environment: 'node', testTimeout: 30_000 },
       },
       {
         extends: true,
