@@ -38,3 +38,15 @@ export function bendRangeNotes(u: number, permittivity: number, corner: 'square'
   if (permittivity < eMin || permittivity > eMax) notes.push({ field: 'permittivity', message: `εr = ${show(permittivity)} is outside ${eMin}…${eMax}, the range of ${name}` })
   return notes
 }
+
+/**
+ * Where a tee leaves the range we give Hammerstad's 1981 closed forms (no numeric range is stated in what
+ * we recall of the source, so these are Portwright's own limits): frequencies above half of
+ * f_p1 = Z1/(2µ0h), where the main arm's parallel-plate model nears its first higher mode, and arms
+ * whose impedance ratio puts the branch's reference plane past the main line's centre (d2 < 0).
+ */
+export function teeRangeNotes(cutoff: number, branchShift: number): RangeNote[] {
+  const notes: RangeNote[] = [{ field: 'frequency', above: cutoff / 2, message: `above ${show(cutoff / 2e9)} GHz (half of f_p1 = Z1/(2µ0h)) the Hammerstad tee model is extrapolated` }]
+  if (branchShift < 0) notes.push({ field: 'branchWidth', message: 'the arms\' impedance ratio is outside the Hammerstad tee fit (the branch\'s reference plane would lie past the main line\'s centre)' })
+  return notes
+}

@@ -11,6 +11,7 @@ import { microstripModel } from './microstrip'
 import { microstripBendModel } from './microstrip-bend'
 import { microstripOpenModel } from './microstrip-open'
 import { microstripStepModel } from './microstrip-step'
+import { microstripTeeModel } from './microstrip-tee'
 import { phaseModel } from './phase'
 import { portModel } from './port'
 import { seriesModel } from './series'
@@ -37,6 +38,7 @@ export const BLOCK_MODELS: Readonly<Record<string, BlockModel>> = Object.fromEnt
     microstripOpenModel,
     microstripStepModel,
     microstripBendModel,
+    microstripTeeModel,
   ].map(model => [model.type, model]),
 )
 
