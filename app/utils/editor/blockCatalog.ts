@@ -7,7 +7,7 @@
 export type BlockKind =
   | 'port' | 'line' | 'stub' | 'load' | 'series'
   | 'hybrid90' | 'hybrid180' | 'divider' | 'phase' | 'attenuator' | 'microstrip' | 'coupled'
-  | 'microstripOpen' | 'microstripStep' | 'microstripBend'
+  | 'microstripOpen' | 'microstripStep' | 'microstripBend' | 'microstripTee'
 
 export type ParamValue = number | string
 
@@ -235,12 +235,23 @@ export const blockCatalog: Record<BlockKind, KindSpec> = {
       { param: 'corner', label: 'Corner', choices: ['square', 'mitred'], required: true },
     ],
   },
+  microstripTee: {
+    kind: 'microstripTee', label: 'Microstrip tee', hint: 'Tee junction of strips: main line through 1 and 2, branch at 3 (terminals on the centre lines)', idPrefix: 'TJ',
+    width: 4, height: 3,
+    terminals: [{ n: 1, x: 0, y: 1, side: 'left' }, { n: 2, x: 4, y: 1, side: 'right' }, { n: 3, x: 2, y: 3, side: 'bottom' }],
+    defaults: { mainWidth: '1.1 mm', branchWidth: '1.1 mm' },
+    fields: [
+      { param: 'substrate', label: 'Substrate', required: true },
+      { param: 'mainWidth', label: 'Main line width (1–2)', unit: 'm', required: true },
+      { param: 'branchWidth', label: 'Branch width (3)', unit: 'm', required: true },
+    ],
+  },
 }
 
 /** Block kinds in the order the block rail shows them. */
 export const railKinds: readonly BlockKind[] = [
   'port', 'line', 'stub', 'load', 'series', 'hybrid90', 'coupled', 'hybrid180', 'divider', 'phase', 'attenuator', 'microstrip',
-  'microstripOpen', 'microstripStep', 'microstripBend',
+  'microstripOpen', 'microstripStep', 'microstripBend', 'microstripTee',
 ]
 
 /** The catalogue entry for a type, or undefined for a type the editor cannot draw. */
