@@ -4,6 +4,7 @@ import type { MicrostripSubstrate } from '../microstrip/types'
 import type { BlockSpec, NetworkDocument, Wire } from '../network/types'
 import { branchLineCentre } from './branch-line-centre'
 import { matchedBandCentre } from './matched-band-centre'
+import { specBandCentre } from './spec-band-centre'
 import { tidy } from './document-parts'
 import { DESIGN_SUBSTRATE, stripFor } from './microstrip-medium'
 
@@ -33,6 +34,12 @@ export interface BranchLineTees {
 export function junctionCentre(document: NetworkDocument, f0: number): number {
   const sections = document.blocks.filter(b => /^Br\d+$/.test(b.id)).length - 1
   return sections <= 1 ? branchLineCentre(document, f0, 0.15, 601) : matchedBandCentre(document, f0, 0.6, 801)
+}
+
+/** Where the compensation aims: one section by `junctionCentre`; more by the middle of the band meeting the spec, else `junctionCentre`. */
+function aimCentre(document: NetworkDocument, f0: number): number {
+  const sections = document.blocks.filter(b => /^Br\d+$/.test(b.id)).length - 1
+  return (sections > 1 ? specBandCentre(document, f0, 0.6, 801) : undefined) ?? junctionCentre(document, f0)
 }
 
 /**
@@ -128,7 +135,7 @@ export function branchLineWithTees(placed: NetworkDocument, substrate: Microstri
   }
   const scaled = (scale: number) => {
     for (const block of doc.blocks) if (base.has(block.id)) block.params.length = mmText(base.get(block.id)! * scale)
-    return junctionCentre(doc, f0)
+    return aimCentre(doc, f0)
   }
   let scale = 1, centre = scaled(scale)
   const shiftedCentre = centre

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest'
-import { branchLineCentre, branchLineJunctionStudy, branchLineWithTees, designQuadrature, inMicrostrip, junctionCentre, runDesign } from '../../../shared/design/index'
+import { branchLineCentre, branchLineJunctionStudy, branchLineWithTees, designQuadrature, inMicrostrip, runDesign, specBandCentre } from '../../../shared/design/index'
 import { analyseMicrostrip } from '../../../shared/microstrip/analyse-microstrip'
 import { teeJunction } from '../../../shared/microstrip/tee-junction'
 import { expectMeetsOwnSpec, expectNoOverlap, expectOwnIds, solveDesign } from './helpers'
@@ -50,13 +50,18 @@ describe('branch-line with tee junctions', () => {
     expect(doc.spec?.band).toEqual({ start: '0.95 * f0', stop: '1.05 * f0' })
   })
 
-  it('centres two- and three-section designs on f0 too (middle of the 20 dB match and isolation band)', () => {
-    for (const sections of ['2', '3']) {
+  it('centres two- and three-section designs on f0 too (the band meeting the spec has its middle at f0) and keeps their spec bands', () => {
+    // The ideal designs' spec bands: 22 % and 27 % (README "Design assistants").
+    for (const [sections, band] of [['2', 0.22], ['3', 0.27]] as const) {
       const designed = runDesign('quadrature', { ...inMicrostripOptions, sections })
       if (!designed.ok) throw new Error(JSON.stringify(designed.problems))
-      expect(Math.abs(junctionCentre(designed.document, f0) / f0 - 1), `${sections} sections`).toBeLessThan(0.005)
-      expectNoOverlap(designed.document)
-      expectMeetsOwnSpec(designed.document, solveDesign(designed.document, 2001))
+      const doc = designed.document
+      expect(doc.blocks.filter(b => b.type === 'microstripTee')).toHaveLength(2 * (Number(sections) + 1))
+      expect(Math.abs(specBandCentre(doc, f0)! / f0 - 1), `${sections} sections`).toBeLessThan(0.005)
+      const start = Number(String(doc.spec!.band!.start).split(' ')[0]), stop = Number(String(doc.spec!.band!.stop).split(' ')[0])
+      expect(stop - start).toBeGreaterThanOrEqual(band)
+      expectNoOverlap(doc)
+      expectMeetsOwnSpec(doc, solveDesign(doc, 2001))
     }
   })
 
