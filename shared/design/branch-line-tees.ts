@@ -20,7 +20,7 @@ export interface BranchLineTees {
   added: Record<string, number>
   /** Factor on every arm's (lengthened) length that puts the centre on f0 (1 without `compensate`). */
   scale: number
-  /** Where the drawn design centres (Hz), by the measure `junctionCentre` uses. */
+  /** Where the drawn design centres (Hz): by `junctionCentre`, or with `compensate` by the measure the factor aims at. */
   centre: number
   /** With `compensate`: where it centres with the tee shifts added and no scale yet. */
   shiftedCentre?: number
