@@ -1,4 +1,5 @@
 import { describe, expect, it } from 'vitest'
+import { prepareNetwork, solveNetwork } from '../../../../shared/solver/index'
 import { threeArmJunctionS } from '../../../../shared/solver/math/three-arm-junction-s'
 import { abs, doc, gram, largestSingularValue, matrix, maxDiff, port, solveAt } from '../helpers'
 
@@ -32,6 +33,15 @@ describe('microstrip tee block', () => {
     expect(departure[1]).toBeGreaterThan(departure[0]!)
     expect(departure[2]).toBeGreaterThan(departure[1]!)
     expect(abs(matrix(r, 2)[2]![2]!)).toBeLessThan(1)
+  })
+
+  it('warns, naming the block, once the sweep passes half of f_p1 = Z1/(2µ0h) (about 13.7 GHz for a 35 Ω main line on 0.508 mm, derived by hand)', () => {
+    const prepared = prepareNetwork(tee('1.88 mm', '1.11 mm'))
+    if (!prepared.ok) throw new Error(prepared.problems[0]!.message)
+    const inRange = solveNetwork(prepared.network, Float64Array.of(1e9, 10e9))
+    expect(inRange.ok && inRange.warnings).toEqual([])
+    const high = solveNetwork(prepared.network, Float64Array.of(1e9, 20e9))
+    expect(high.ok && high.warnings.map(w => w.message)).toEqual([expect.stringMatching(/^block TJ \(microstripTee\), frequency: above 13\.\d GHz \(half of f_p1 = Z1\/\(2µ0h\)\) the Hammerstad tee model is extrapolated$/)])
   })
 
   it('names the substrate a tee refers to when the document lacks it', () => {
