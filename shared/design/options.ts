@@ -9,6 +9,7 @@ import { chebyshevSecant } from './transformer-sections'
 import { designTransformer, DEFAULT_MAX_REFLECTION } from './transformer'
 import type { DesignKind } from './types'
 import { branchLineWithTees } from './branch-line-tees'
+import { coupledLineInMicrostrip } from './coupled-microstrip'
 import { inMicrostrip, remeasureBand } from './microstrip-medium'
 
 /** One option of an assistant, as the command line spells it (without the leading --). */
@@ -53,7 +54,7 @@ const impedance: DesignOption = { name: 'impedance', label: 'System impedance Z0
 /**
  * Options of our own that place the design in microstrip on a substrate instead of ideal lines:
  * permittivity and height together choose microstrip; the rest default to a zero-thickness,
- * lossless, smooth strip. Not for `coupled-line` (no coupled microstrip model yet).
+ * lossless, smooth strip. `coupled-line` becomes a `coupledMicrostrip` block (Garg & Bahl's quasi-static model).
  */
 export const SUBSTRATE_OPTIONS: readonly DesignOption[] = [
   { name: 'substrate-permittivity', label: 'Microstrip: relative permittivity εr (empty: ideal lines)', kind: 'ratio', required: false, min: 1, max: 128 },
@@ -137,7 +138,7 @@ export const DESIGN_ASSISTANTS: Readonly<Record<DesignKind, Assistant>> = {
   'coupled-line': {
     kind: 'coupled-line',
     summary: 'Quarter-wave coupled-line coupler: 1 in, 2 through, 3 coupled, 4 isolated',
-    options: [frequency, impedance, { name: 'coupling-db', label: 'Coupling to port 3', kind: 'decibel', required: true, min: 3, max: 40 }],
+    options: [frequency, impedance, { name: 'coupling-db', label: 'Coupling to port 3', kind: 'decibel', required: true, min: 3, max: 40 }, ...SUBSTRATE_OPTIONS],
     design: v => designCoupledLine({ frequency: v.frequency as number, impedance: v.impedance as number, couplingDb: v['coupling-db'] as number }),
   },
 }
@@ -208,6 +209,7 @@ export function runDesign(kind: DesignKind, given: Record<string, string>): { ok
   }
   try {
     const f0 = values.frequency as number
+    if (kind === 'coupled-line') return { ok: true, document: coupledLineInMicrostrip(ideal, substrate, f0) }
     const placed = inMicrostrip(ideal, substrate, f0)
     if (kind !== 'quadrature' || values['substrate-junctions'] === 'ideal') return { ok: true, document: placed }
     const { document } = branchLineWithTees(placed, substrate, f0, values.impedance as number, true)

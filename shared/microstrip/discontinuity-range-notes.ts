@@ -50,3 +50,15 @@ export function teeRangeNotes(cutoff: number, branchShift: number): RangeNote[] 
   if (branchShift < 0) notes.push({ field: 'branchWidth', message: 'the arms\' impedance ratio is outside the Hammerstad tee fit (the branch\'s reference plane would lie past the main line\'s centre)' })
   return notes
 }
+
+/**
+ * Where coupled microstrips leave the stated range of Garg & Bahl's 1979 model (0.2 ≤ W/h ≤ 2,
+ * 0.05 ≤ s/h ≤ 2 [memory]); `quasiStaticLimit` (Hz) is where the model's lack of dispersion starts to tell.
+ */
+export function coupledRangeNotes(u: number, g: number, quasiStaticLimit: number): RangeNote[] {
+  const notes: RangeNote[] = []
+  if (u < 0.2 || u > 2) notes.push({ field: 'width', message: `W/h = ${show(u)} is outside 0.2…2, the range of the Garg–Bahl coupled-line model` })
+  if (g < 0.05 || g > 2) notes.push({ field: 'gap', message: `s/h = ${show(g)} is outside 0.05…2, the range of the Garg–Bahl coupled-line model` })
+  notes.push({ field: 'frequency', above: quasiStaticLimit, message: `above ${show(quasiStaticLimit / 1e9)} GHz a single strip's ε_eff has risen 2 % by dispersion, which the quasi-static coupled-line model leaves out` })
+  return notes
+}

@@ -1,6 +1,7 @@
 import type { BlockModel } from '../types'
 import { attenuatorModel } from './attenuator'
 import { coupledModel } from './coupled'
+import { coupledMicrostripModel } from './coupled-microstrip'
 import { dataModel } from './data'
 import { dividerModel } from './divider'
 import { hybrid180Model } from './hybrid180'
@@ -39,6 +40,7 @@ export const BLOCK_MODELS: Readonly<Record<string, BlockModel>> = Object.fromEnt
     microstripStepModel,
     microstripBendModel,
     microstripTeeModel,
+    coupledMicrostripModel,
   ].map(model => [model.type, model]),
 )
 
