@@ -10,7 +10,8 @@ function usage(): string {
   return [
     'usage: npm run -s design -- KIND [--OPTION VALUE …]',
     ...DESIGN_KINDS.map(kind => `  ${kind} ${DESIGN_ASSISTANTS[kind].options.filter(o => !isSubstrateOption(o.name)).map(o => (o.required ? `--${o.name} V` : `[--${o.name} V]`)).join(' ')}`),
-    `  in microstrip (all but coupled-line): ${SUBSTRATE_OPTIONS.map(o => `[--${o.name} V]`).join(' ')}`,
+    `  in microstrip (coupled-line as coupled microstrips): ${SUBSTRATE_OPTIONS.map(o => `[--${o.name} V]`).join(' ')}`,
+    '  quadrature in microstrip also: [--substrate-junctions tee|ideal] (default tee: tee junctions, arms compensated)',
   ].join('\n')
 }
 

@@ -1,6 +1,7 @@
 import type { MicrostripSubstrate } from '../microstrip/types'
 import type { BlockSpec, NetworkDocument } from '../network/types'
 import { branchLineCentre } from './branch-line-centre'
+import { branchLineWithTees } from './branch-line-tees'
 import { tidy } from './document-parts'
 import { inMicrostrip } from './microstrip-medium'
 import { designQuadrature } from './quadrature'
@@ -19,6 +20,18 @@ export interface JunctionStudy {
   /** Widths (m) of the through arms (Z0/√2) and of the branches and ports (Z0). */
   throughWidth: number
   branchWidth: number
+  /** Centre (Hz) with a `microstripTee` at each junction (and steps to the ports), arms as placed. */
+  teeCentre: number
+  /** (tee − placed)/f0, in per cent. */
+  teeShiftPercent: number
+  /** Length (m) the tee compensation adds to each branch and to each through arm (both ends' shifts at f0). */
+  teeAddedBranch: number
+  teeAddedThrough: number
+  /** Centre (Hz) with the tee shifts added to the arms and no further scale. */
+  teeShiftedCentre: number
+  /** Factor on the lengthened arms that centres the tee design on f0, and the centre it gives. */
+  teeScale: number
+  teeCompensatedCentre: number
 }
 
 const mm = (text: unknown) => Number(String(text).replace(' mm', '')) * 1e-3
@@ -29,7 +42,9 @@ const mm = (text: unknown) => Number(String(text).replace(' mm', '')) * 1e-3
  * width of the strip it meets at either end (reference planes at the strip edges, common practice),
  * and the step from a Z0 strip into the wider Z0/√2 arm modelled at each junction with the step
  * parasitics of Gupta, Garg, Bahl & Bhartia (Microstrip Lines and Slotlines, 2nd ed., 1996, §3.4)
- * [memory]. The tee's own parasitics are not modelled. Every figure is measured with the solver.
+ * [memory]. Third, with the tee model: a `microstripTee` at every junction (Hammerstad 1981 [memory]),
+ * arms as placed, and the compensation the quadrature assistant applies (`branchLineWithTees`).
+ * Every figure is measured with the solver.
  */
 export function branchLineJunctionStudy(substrate: MicrostripSubstrate, f0: number, impedance = 50): JunctionStudy {
   const placed = inMicrostrip(designQuadrature({ frequency: f0, impedance }), substrate, f0)
@@ -68,7 +83,16 @@ export function branchLineJunctionStudy(substrate: MicrostripSubstrate, f0: numb
     else hi = mid
   }
   const compensationScale = 0.5 * (lo + hi)
+  const withTees = branchLineWithTees(placed, substrate, f0, impedance, false)
+  const compensated = branchLineWithTees(placed, substrate, f0, impedance, true)
   return {
+    teeCentre: withTees.centre,
+    teeShiftPercent: (100 * (withTees.centre - placedCentre)) / f0,
+    teeAddedBranch: compensated.added.Br1 ?? 0,
+    teeAddedThrough: compensated.added.Ln1 ?? 0,
+    teeShiftedCentre: compensated.shiftedCentre!,
+    teeScale: compensated.scale,
+    teeCompensatedCentre: branchLineCentre(compensated.document, f0),
     placedCentre, etchedCentre, shiftPercent: (100 * (etchedCentre - placedCentre)) / f0,
     compensationScale, compensatedCentre: branchLineCentre(etched(compensationScale), f0), throughWidth, branchWidth,
   }

@@ -53,10 +53,14 @@ export function inMicrostrip(document: NetworkDocument, substrate: MicrostripSub
   }
   out.substrates = { ...(out.substrates ?? {}), [DESIGN_SUBSTRATE]: substrateEntry(substrate) }
   out.name = `${out.name ?? 'Design'}, microstrip εr ${tidy(substrate.permittivity)}, h ${tidy(substrate.height * 1e3)} mm`
-  if (out.spec) {
-    delete out.spec.band
-    const half = metHalfWidth(out, f0, (out.spec.conditions ?? []) as unknown as Parameters<typeof metHalfWidth>[2])
-    if (half !== undefined && half > 0) out.spec.band = { start: `${tidy(1 - half)} * f0`, stop: `${tidy(1 + half)} * f0` }
-  }
+  remeasureBand(out, f0)
   return out
+}
+
+/** Measures a designed document's spec band again (in place), after its blocks changed. */
+export function remeasureBand(document: NetworkDocument, f0: number): void {
+  if (!document.spec) return
+  delete document.spec.band
+  const half = metHalfWidth(document, f0, (document.spec.conditions ?? []) as unknown as Parameters<typeof metHalfWidth>[2])
+  if (half !== undefined && half > 0) document.spec.band = { start: `${tidy(1 - half)} * f0`, stop: `${tidy(1 + half)} * f0` }
 }

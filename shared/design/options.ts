@@ -8,7 +8,9 @@ import { designRing } from './ring'
 import { chebyshevSecant } from './transformer-sections'
 import { designTransformer, DEFAULT_MAX_REFLECTION } from './transformer'
 import type { DesignKind } from './types'
-import { inMicrostrip } from './microstrip-medium'
+import { branchLineWithTees } from './branch-line-tees'
+import { coupledLineInMicrostrip } from './coupled-microstrip'
+import { inMicrostrip, remeasureBand } from './microstrip-medium'
 
 /** One option of an assistant, as the command line spells it (without the leading --). */
 export interface DesignOption {
@@ -52,7 +54,7 @@ const impedance: DesignOption = { name: 'impedance', label: 'System impedance Z0
 /**
  * Options of our own that place the design in microstrip on a substrate instead of ideal lines:
  * permittivity and height together choose microstrip; the rest default to a zero-thickness,
- * lossless, smooth strip. Not for `coupled-line` (no coupled microstrip model yet).
+ * lossless, smooth strip. `coupled-line` becomes a `coupledMicrostrip` block (Garg & Bahl's quasi-static model).
  */
 export const SUBSTRATE_OPTIONS: readonly DesignOption[] = [
   { name: 'substrate-permittivity', label: 'Microstrip: relative permittivity εr (empty: ideal lines)', kind: 'ratio', required: false, min: 1, max: 128 },
@@ -61,7 +63,14 @@ export const SUBSTRATE_OPTIONS: readonly DesignOption[] = [
   { name: 'substrate-loss-tangent', label: 'Microstrip: loss tangent', kind: 'ratio', required: false, min: 0, max: 1, placeholder: '0' },
   { name: 'substrate-conductivity', label: 'Microstrip: conductivity (S/m; empty: lossless)', kind: 'conductivity', required: false, above: 0, max: 1e9 },
 ]
-const SUBSTRATE_NAMES = new Set(SUBSTRATE_OPTIONS.map(o => o.name))
+
+/**
+ * Of our own, quadrature only: in microstrip, draw each junction as a `microstripTee` (with steps to the
+ * ports' strips) and lengthen the arms so the design centres on f0 again (`tee`, the default), or keep
+ * ideal nodes with arms measured centre to centre (`ideal`).
+ */
+export const JUNCTIONS_OPTION: DesignOption = { name: 'substrate-junctions', label: 'Microstrip: junctions (tee: tee models, arms compensated; ideal: plain nodes)', kind: 'choice', required: false, choices: ['tee', 'ideal'], placeholder: 'tee' }
+const SUBSTRATE_NAMES = new Set([...SUBSTRATE_OPTIONS, JUNCTIONS_OPTION].map(o => o.name))
 
 /** Whether an option places the design on a substrate (the dialog groups these). */
 export function isSubstrateOption(name: string): boolean {
@@ -78,6 +87,7 @@ export const DESIGN_ASSISTANTS: Readonly<Record<DesignKind, Assistant>> = {
       { name: 'coupling-db', label: 'Coupling to port 3', kind: 'decibel', required: false, min: 1, max: 15, placeholder: '3.0103' },
       { name: 'sections', label: 'Sections', kind: 'choice', required: false, choices: ['1', '2', '3'], placeholder: '1' },
       ...SUBSTRATE_OPTIONS,
+      JUNCTIONS_OPTION,
     ],
     check(v) {
       // Two sections at 10 dB already need outer branches of 6.2·Z0; weaker coupling only gets worse.
@@ -128,7 +138,7 @@ export const DESIGN_ASSISTANTS: Readonly<Record<DesignKind, Assistant>> = {
   'coupled-line': {
     kind: 'coupled-line',
     summary: 'Quarter-wave coupled-line coupler: 1 in, 2 through, 3 coupled, 4 isolated',
-    options: [frequency, impedance, { name: 'coupling-db', label: 'Coupling to port 3', kind: 'decibel', required: true, min: 3, max: 40 }],
+    options: [frequency, impedance, { name: 'coupling-db', label: 'Coupling to port 3', kind: 'decibel', required: true, min: 3, max: 40 }, ...SUBSTRATE_OPTIONS],
     design: v => designCoupledLine({ frequency: v.frequency as number, impedance: v.impedance as number, couplingDb: v['coupling-db'] as number }),
   },
 }
@@ -198,7 +208,14 @@ export function runDesign(kind: DesignKind, given: Record<string, string>): { ok
     roughness: 0,
   }
   try {
-    return { ok: true, document: inMicrostrip(ideal, substrate, values.frequency as number) }
+    const f0 = values.frequency as number
+    if (kind === 'coupled-line') return { ok: true, document: coupledLineInMicrostrip(ideal, substrate, f0) }
+    const placed = inMicrostrip(ideal, substrate, f0)
+    if (kind !== 'quadrature' || values['substrate-junctions'] === 'ideal') return { ok: true, document: placed }
+    const { document } = branchLineWithTees(placed, substrate, f0, values.impedance as number, true)
+    document.name = `${document.name}, tee junctions`
+    remeasureBand(document, f0)
+    return { ok: true, document }
   } catch (error) {
     return { ok: false, problems: [{ option: 'substrate-permittivity', message: `this board cannot carry the design: ${(error as Error).message}` }] }
   }

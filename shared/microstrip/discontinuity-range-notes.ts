@@ -38,3 +38,27 @@ export function bendRangeNotes(u: number, permittivity: number, corner: 'square'
   if (permittivity < eMin || permittivity > eMax) notes.push({ field: 'permittivity', message: `εr = ${show(permittivity)} is outside ${eMin}…${eMax}, the range of ${name}` })
   return notes
 }
+
+/**
+ * Where a tee leaves the range we give Hammerstad's 1981 closed forms (no numeric range is stated in what
+ * we recall of the source, so these are Portwright's own limits): frequencies above half of
+ * f_p1 = Z1/(2µ0h), where the main arm's parallel-plate model nears its first higher mode, and arms
+ * whose impedance ratio puts the branch's reference plane past the main line's centre (d2 < 0).
+ */
+export function teeRangeNotes(cutoff: number, branchShift: number): RangeNote[] {
+  const notes: RangeNote[] = [{ field: 'frequency', above: cutoff / 2, message: `above ${show(cutoff / 2e9)} GHz (half of f_p1 = Z1/(2µ0h)) the Hammerstad tee model is extrapolated` }]
+  if (branchShift < 0) notes.push({ field: 'branchWidth', message: 'the arms\' impedance ratio is outside the Hammerstad tee fit (the branch\'s reference plane would lie past the main line\'s centre)' })
+  return notes
+}
+
+/**
+ * Where coupled microstrips leave the stated range of Garg & Bahl's 1979 model (0.2 ≤ W/h ≤ 2,
+ * 0.05 ≤ s/h ≤ 2 [memory]); `quasiStaticLimit` (Hz) is where the model's lack of dispersion starts to tell.
+ */
+export function coupledRangeNotes(u: number, g: number, quasiStaticLimit: number): RangeNote[] {
+  const notes: RangeNote[] = []
+  if (u < 0.2 || u > 2) notes.push({ field: 'width', message: `W/h = ${show(u)} is outside 0.2…2, the range of the Garg–Bahl coupled-line model` })
+  if (g < 0.05 || g > 2) notes.push({ field: 'gap', message: `s/h = ${show(g)} is outside 0.05…2, the range of the Garg–Bahl coupled-line model` })
+  notes.push({ field: 'frequency', above: quasiStaticLimit, message: `above ${show(quasiStaticLimit / 1e9)} GHz a single strip's ε_eff has risen 2 % by dispersion, which the quasi-static coupled-line model leaves out` })
+  return notes
+}

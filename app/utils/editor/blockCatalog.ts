@@ -7,7 +7,7 @@
 export type BlockKind =
   | 'port' | 'line' | 'stub' | 'load' | 'series'
   | 'hybrid90' | 'hybrid180' | 'divider' | 'phase' | 'attenuator' | 'microstrip' | 'coupled'
-  | 'microstripOpen' | 'microstripStep' | 'microstripBend'
+  | 'microstripOpen' | 'microstripStep' | 'microstripBend' | 'microstripTee' | 'coupledMicrostrip'
 
 export type ParamValue = number | string
 
@@ -235,12 +235,40 @@ export const blockCatalog: Record<BlockKind, KindSpec> = {
       { param: 'corner', label: 'Corner', choices: ['square', 'mitred'], required: true },
     ],
   },
+  microstripTee: {
+    kind: 'microstripTee', label: 'Microstrip tee', hint: 'Tee junction of strips: main line through 1 and 2, branch at 3 (terminals on the centre lines)', idPrefix: 'TJ',
+    width: 4, height: 3,
+    terminals: [{ n: 1, x: 0, y: 1, side: 'left' }, { n: 2, x: 4, y: 1, side: 'right' }, { n: 3, x: 2, y: 3, side: 'bottom' }],
+    defaults: { mainWidth: '1.1 mm', branchWidth: '1.1 mm' },
+    fields: [
+      { param: 'substrate', label: 'Substrate', required: true },
+      { param: 'mainWidth', label: 'Main line width (1–2)', unit: 'm', required: true },
+      { param: 'branchWidth', label: 'Branch width (3)', unit: 'm', required: true },
+    ],
+  },
+  coupledMicrostrip: {
+    kind: 'coupledMicrostrip', label: 'Coupled microstrips', hint: 'Two coupled strips on a substrate: 1 in, 2 through, 3 coupled (beside 1), 4 isolated (beside 2)', idPrefix: 'CM',
+    width: 4, height: 6,
+    terminals: [
+      { n: 1, name: 'in', x: 0, y: 1, side: 'left' },
+      { n: 2, name: 'through', x: 4, y: 1, side: 'right' },
+      { n: 3, name: 'coupled', x: 0, y: 5, side: 'left' },
+      { n: 4, name: 'isolated', x: 4, y: 5, side: 'right' },
+    ],
+    defaults: { width: '1 mm', gap: '0.2 mm', length: '18 mm' },
+    fields: [
+      { param: 'substrate', label: 'Substrate', required: true },
+      { param: 'width', label: 'Width of each strip', unit: 'm', required: true },
+      { param: 'gap', label: 'Gap', unit: 'm', required: true },
+      { param: 'length', label: 'Length', unit: 'm', required: true },
+    ],
+  },
 }
 
 /** Block kinds in the order the block rail shows them. */
 export const railKinds: readonly BlockKind[] = [
   'port', 'line', 'stub', 'load', 'series', 'hybrid90', 'coupled', 'hybrid180', 'divider', 'phase', 'attenuator', 'microstrip',
-  'microstripOpen', 'microstripStep', 'microstripBend',
+  'microstripOpen', 'microstripStep', 'microstripBend', 'microstripTee', 'coupledMicrostrip',
 ]
 
 /** The catalogue entry for a type, or undefined for a type the editor cannot draw. */

@@ -56,7 +56,7 @@ export function addBlock(doc: NetworkDocument, kind: BlockKind, at: { x: number,
   const params: Record<string, ParamValue> = { ...spec.defaults }
   fitDefaults(params, doc)
   if (kind === 'port') params.index = nextPortIndex(doc)
-  if (kind === 'microstrip' || kind === 'microstripOpen' || kind === 'microstripStep' || kind === 'microstripBend') {
+  if (kind === 'microstrip' || kind === 'microstripOpen' || kind === 'microstripStep' || kind === 'microstripBend' || kind === 'microstripTee' || kind === 'coupledMicrostrip') {
     // The block needs a substrate to be solved: use the first one, or start one the settings panel can edit.
     params.substrate = Object.keys(doc.substrates ?? {})[0] ?? addSubstrate(doc)
   }

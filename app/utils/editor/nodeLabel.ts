@@ -37,6 +37,8 @@ export function nodeLabel(type: string, p: Params, values?: Record<string, strin
     case 'microstrip': parts.push(show(p, values, 'width', ' m'), show(p, values, 'length', ' m')); break
     case 'microstripOpen': parts.push(show(p, values, 'width', ' m')); break
     case 'microstripStep': parts.push(`${show(p, values, 'width1', ' m') ?? '?'} → ${show(p, values, 'width2', ' m') ?? '?'}`); break
+    case 'coupledMicrostrip': parts.push(show(p, values, 'width', ' m'), show(p, values, 'gap', ' m'), show(p, values, 'length', ' m')); break
+    case 'microstripTee': parts.push(`${show(p, values, 'mainWidth', ' m') ?? '?'} ⊥ ${show(p, values, 'branchWidth', ' m') ?? '?'}`); break
     case 'microstripBend': parts.push(show(p, values, 'width', ' m'), p.corner !== undefined ? String(p.corner) : undefined); break
   }
   return parts.filter(Boolean).join(' · ')

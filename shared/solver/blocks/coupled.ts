@@ -65,7 +65,7 @@ export const coupledModel: BlockModel = {
  * impedance z, phase θ and attenuation a (Np): Γ = sh·(z − 1/z)/Δ, T = 2/Δ,
  * Δ = 2·ch + sh·(z + 1/z), with ch, sh the cosh and sinh of a + jθ.
  */
-function uniformLine(z: number, theta: number, a: number, out: Float64Array): void {
+export function uniformLine(z: number, theta: number, a: number, out: Float64Array): void {
   const cos = Math.cos(theta), sin = Math.sin(theta)
   const chR = Math.cosh(a) * cos, chI = Math.sinh(a) * sin
   const shR = Math.sinh(a) * cos, shI = Math.cosh(a) * sin

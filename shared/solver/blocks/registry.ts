@@ -1,6 +1,7 @@
 import type { BlockModel } from '../types'
 import { attenuatorModel } from './attenuator'
 import { coupledModel } from './coupled'
+import { coupledMicrostripModel } from './coupled-microstrip'
 import { dataModel } from './data'
 import { dividerModel } from './divider'
 import { hybrid180Model } from './hybrid180'
@@ -11,6 +12,7 @@ import { microstripModel } from './microstrip'
 import { microstripBendModel } from './microstrip-bend'
 import { microstripOpenModel } from './microstrip-open'
 import { microstripStepModel } from './microstrip-step'
+import { microstripTeeModel } from './microstrip-tee'
 import { phaseModel } from './phase'
 import { portModel } from './port'
 import { seriesModel } from './series'
@@ -37,6 +39,8 @@ export const BLOCK_MODELS: Readonly<Record<string, BlockModel>> = Object.fromEnt
     microstripOpenModel,
     microstripStepModel,
     microstripBendModel,
+    microstripTeeModel,
+    coupledMicrostripModel,
   ].map(model => [model.type, model]),
 )
 

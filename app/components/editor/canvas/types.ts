@@ -28,5 +28,7 @@ export type AttenuatorNodeData = Typed<{ impedance?: Param, db?: Param }>
 export type MicrostripNodeData = Typed<{ substrate?: Param, width?: Param, length?: Param }>
 export type MicrostripOpenNodeData = Typed<{ substrate?: Param, width?: Param }>
 export type MicrostripStepNodeData = Typed<{ substrate?: Param, width1?: Param, width2?: Param }>
+export type CoupledMicrostripNodeData = Typed<{ substrate?: Param, width?: Param, gap?: Param, length?: Param }>
+export type MicrostripTeeNodeData = Typed<{ substrate?: Param, mainWidth?: Param, branchWidth?: Param }>
 export type MicrostripBendNodeData = Typed<{ substrate?: Param, width?: Param, corner?: Param }>
 export type GenericNodeData = Typed<Record<string, Param>>
