@@ -170,7 +170,12 @@ export class CompiledNetwork implements NestedNetwork {
       this.ownRe = this.keptBuffers.map(buffer => this.bufRe[buffer]!)
       this.ownIm = this.keptBuffers.map(buffer => this.bufIm[buffer]!)
       this.forgetKept()
-      this.steps.push(...recordSteps(space, this.connections, late))
+      // The last joins are planned on what is left, so the block meets its small junctions before the large rest.
+      const lastPlan = planJoinOrder(
+        { items: alive.map(item => item.sockets), connections: late.map(c => this.connections[c]!), socketCount: space.nextSocket, order: options.joinOrder, seed: options.seed },
+        options.plans,
+      )
+      this.steps.push(...recordSteps(space, this.connections, lastPlan.order.map(c => late[c]!)))
     }
     this.generationPending = codeGenerationAllowed()
     this.stepCount = this.steps.length
@@ -253,6 +258,7 @@ export class CompiledNetwork implements NestedNetwork {
     if (lastInstance) entry.instance = lastInstance
     const reuse = this.keptFrequencies !== undefined && sameNumbers(this.keptFrequencies, frequencies)
     if (!reuse) this.forgetKept()
+    this.fillJunctions()
     try {
       if (!this.keepRuns(entry, frequencies, re, im, reuse)) {
         if (!reuse) this.forgetKept()
@@ -285,7 +291,7 @@ export class CompiledNetwork implements NestedNetwork {
         bufIm[buffer] = this.keptIm[i]![chunk]!
       }
       const ok = reuse
-        ? this.fillLast(frequencies, start, count) && this.replay(frequencies, start, count, this.keptSteps, re, im, start * nn)
+        ? this.fillBlock(entry, frequencies, start, count) && this.replay(frequencies, start, count, this.keptSteps, re, im, start * nn)
         : this.solveRun(frequencies, start, count, re, im, start * nn)
       if (!ok) return false
     }
@@ -345,8 +351,16 @@ export class CompiledNetwork implements NestedNetwork {
   /** Fills the last block and the junctions at its nets, if there is a last block. */
   private fillLast(frequencies: Float64Array, start: number, count: number): boolean {
     if (!this.lastEntry) return true
-    for (const entry of this.lastJunctions) if (!this.fillBlock(entry, frequencies, start, count)) return false
+    this.fillJunctions()
     return this.fillBlock(this.lastEntry, frequencies, start, count)
+  }
+
+  /** Junction S depends on references only, not frequency: filled once into every slot. Their buffers are never swapped or written by joins. */
+  private fillJunctions(): void {
+    for (const entry of this.lastJunctions) {
+      entry.instance.fill(0, entry.re, entry.im)
+      spread(entry.re, entry.im, this.bufRe[entry.buffer]!, this.bufIm[entry.buffer]!, CHUNK)
+    }
   }
 
   /** Writes one block's S into its buffer slots for this run. */
