@@ -123,21 +123,40 @@ export function useSolveWorker(options: { debounceMs?: number, loadData?: (name:
     worker.postMessage({ seq: ++latest, document, ...(Object.keys(dataSets).length ? { dataSets } : {}), ...(networks ? { networks } : {}) })
   }
 
+  // Evaluated values and problems of the newest reply with a result, shown one task after its plot.
+  let deferred: SolveReply | null = null
+
+  function showDetails(reply: SolveReply) {
+    evaluated.value = reply.evaluated
+    // An empty list for an empty list would only make everything that lists problems run again.
+    if (reply.problems.length || problems.value.length) problems.value = reply.problems
+  }
+
+  function showDeferred() {
+    const reply = deferred
+    deferred = null
+    if (reply) showDetails(reply)
+  }
+
   function receive(reply: SolveReply) {
     inFlight = false
     if (pending) { send(); return } // a newer document is waiting: this reply is already stale
     busy.value = false
     if (reply.seq !== latest) return
-    evaluated.value = reply.evaluated
-    // An empty list for an empty list would only make everything that lists problems run again.
-    if (reply.problems.length || problems.value.length) problems.value = reply.problems
     solveMs.value = reply.solveMs
     if (reply.result) {
       result.value = reply.result
       stale.value = false
       resultSeq.value++
+      // The plot redraws first; the inspector and canvas labels (which re-render many elements) a task later.
+      if (!deferred) setTimeout(showDeferred, 0)
+      deferred = reply
     }
-    else stale.value = result.value !== null
+    else {
+      deferred = null
+      showDetails(reply)
+      stale.value = result.value !== null
+    }
   }
 
   /** Ask for a solve of this document. */
@@ -160,6 +179,7 @@ export function useSolveWorker(options: { debounceMs?: number, loadData?: (name:
 
   onBeforeUnmount(() => {
     clearTimeout(timer)
+    deferred = null
     worker?.terminate()
     worker = null
   })
