@@ -15,7 +15,9 @@ function step(solver: EditSolver, document: unknown, frequencies: Float64Array, 
   const prepared = prepareNetwork(document, options)
   if (!prepared.ok) throw new Error(prepared.problems.map(p => p.message).join('\n'))
   const edited = solver.solve(prepared.network, prepared.evaluated, frequencies)
-  const full = solveNetwork(prepareNetwork(document, options).network!, frequencies)
+  const again = prepareNetwork(document, options)
+  if (!again.ok) throw new Error('the document prepared once but not twice')
+  const full = solveNetwork(again.network, frequencies)
   expect(edited.ok).toBe(full.ok)
   if (!edited.ok || !full.ok) return edited.mode
   expect(edited.warnings).toEqual(full.warnings)
