@@ -72,4 +72,19 @@ describe('order in which a solve reply is shown', () => {
     await nextTask()
     expect(solver.evaluated.value?.blocks.TL1?.impedance?.value).toBe(0)
   })
+
+  it('says a solve is slow only after it has run for a while, and not once it has answered', async () => {
+    const solver = useSolveWorker()
+    solver.request(doc('a'))
+    const worker = FakeWorker.last!
+    expect(solver.busy.value).toBe(true)
+    await new Promise(resolve => setTimeout(resolve, 20))
+    expect(solver.slow.value).toBe(false)
+    await new Promise(resolve => setTimeout(resolve, 250))
+    expect(solver.slow.value).toBe(true)
+    worker.answer({ evaluated: evaluated(40), problems: [], result: result(), solveMs: 1 })
+    await nextTask()
+    expect(solver.slow.value).toBe(false)
+    expect(solver.busy.value).toBe(false)
+  })
 })
