@@ -5,12 +5,13 @@
  * once a process has solved enough, are in their steady state) and prints one JSON line
  * {"points", "blocks", "medianMs", "minMs"}.
  * With --prepare it times what the editor does per edit instead: change one parameter, then
- * prepare and solve, alternately without and with a join-plan cache, and prints
- * {"points", "blocks", "fresh": {"medianMs", "minMs"}, "reuse": {"medianMs", "minMs"}}.
+ * prepare and solve, alternately without and with a join-plan cache and incrementally (the
+ * edited block joined last, the rest kept: `EditSolver`), and prints
+ * {"points", "blocks", "fresh": {…}, "reuse": {…}, "incremental": {"medianMs", "minMs"}}.
  */
 import { performance } from 'node:perf_hooks'
 import { parseArgs } from 'node:util'
-import { JoinPlanCache, prepareNetwork, resolveSweep, solveNetwork, sweepFrequencies, type PrepareOptions } from '../shared/solver/index'
+import { EditSolver, JoinPlanCache, prepareNetwork, resolveSweep, solveNetwork, sweepFrequencies, type PrepareOptions } from '../shared/solver/index'
 import type { SweepSettings } from '../shared/solver/index'
 import { fail, fileResolver, readDocument, sweepOverride } from './network-cli'
 
@@ -42,13 +43,14 @@ function edited(document: unknown, step: number): unknown {
   return copy
 }
 
-/** Prepares and solves once; fails the run on problems. */
-function prepareAndSolve(document: unknown, options: PrepareOptions, override: Partial<SweepSettings>): void {
+/** Prepares and solves once (through `edits` when given); fails the run on problems. */
+function prepareAndSolve(document: unknown, options: PrepareOptions, override: Partial<SweepSettings>, edits?: EditSolver): void {
   const prepared = prepareNetwork(document, options)
   if (!prepared.ok) fail(prepared.problems)
   const sweep = resolveSweep(prepared.network.sweep, override)
   if (!sweep.ok) fail(sweep.problems)
-  const solved = solveNetwork(prepared.network, sweepFrequencies(sweep.sweep))
+  const frequencies = sweepFrequencies(sweep.sweep)
+  const solved = edits ? edits.solve(prepared.network, prepared.evaluated, frequencies) : solveNetwork(prepared.network, frequencies)
   if (!solved.ok) fail(solved.problems)
 }
 
@@ -79,18 +81,23 @@ function main(): void {
   if (values.prepare) {
     const fresh = { resolveSubnetwork: fileResolver(path) }
     const reuse = { ...fresh, plans: new JoinPlanCache() }
-    const times = { fresh: [] as number[], reuse: [] as number[] }
-    warmUp(() => prepareAndSolve(edited(document, 1), reuse, override))
-    // Warm-up, then alternate so both see the same machine load; edits are copied outside the timing.
+    const edits = new EditSolver({ plans: reuse.plans })
+    const times = { fresh: [] as number[], reuse: [] as number[], incremental: [] as number[] }
+    let warm = 0
+    warmUp(() => {
+      prepareAndSolve(edited(document, warm % 5), reuse, override)
+      prepareAndSolve(edited(document, warm++ % 5), reuse, override, edits)
+    })
+    // Warm-up, then alternate so all see the same machine load; edits are copied outside the timing.
     for (let r = -1; r < repeat; r++) {
-      for (const mode of ['fresh', 'reuse'] as const) {
+      for (const mode of ['fresh', 'reuse', 'incremental'] as const) {
         const input = edited(document, (r + 1) % 5)
         const t0 = performance.now()
-        prepareAndSolve(input, mode === 'fresh' ? fresh : reuse, override)
+        prepareAndSolve(input, mode === 'fresh' ? fresh : reuse, override, mode === 'incremental' ? edits : undefined)
         if (r >= 0) times[mode].push(performance.now() - t0)
       }
     }
-    process.stdout.write(`${JSON.stringify({ ...head, fresh: summary(times.fresh), reuse: summary(times.reuse) })}\n`)
+    process.stdout.write(`${JSON.stringify({ ...head, fresh: summary(times.fresh), reuse: summary(times.reuse), incremental: summary(times.incremental) })}\n`)
     return
   }
 

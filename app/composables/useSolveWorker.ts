@@ -4,11 +4,14 @@
  * and a reply for a document that has since changed is dropped. The last good
  * result stays on screen, marked stale, while the newest document has errors.
  */
-import { onBeforeUnmount, ref, shallowRef } from 'vue'
+import { onBeforeUnmount, ref, shallowRef, watch } from 'vue'
 import type { Evaluated, NetworkDocument, Problem } from '~~/shared/network/types'
 import type { SolveReply, SolvedData } from '~~/app/workers/protocol'
 import type { DataSet } from '~~/shared/solver/types'
 import { subnetworkRefs } from '~~/app/utils/editor/externalTerminals'
+
+/** How long a solve runs before `slow` says so. */
+const SLOW_AFTER_MS = 200
 
 export interface SolveState {
   result: SolvedData | null
@@ -17,6 +20,8 @@ export interface SolveState {
   problems: Problem[]
   evaluated: Evaluated | null
   busy: boolean
+  /** A solve has been busy for SLOW_AFTER_MS or more. */
+  slow: boolean
   solveMs: number
   /** Increments whenever a new result is shown (plots redraw on it). */
   resultSeq: number
@@ -51,6 +56,15 @@ export function useSolveWorker(options: { debounceMs?: number, loadData?: (name:
   const problems = shallowRef<Problem[]>([])
   const evaluated = shallowRef<Evaluated | null>(null)
   const busy = ref(false)
+  // "Solving…" only for a solve long enough to notice: a slider's solves take milliseconds, and a flag that
+  // flips twice per edit would re-render the workspace and the dock twice per edit for nothing.
+  const slow = ref(false)
+  let slowTimer: ReturnType<typeof setTimeout> | undefined
+  watch(busy, (now) => {
+    clearTimeout(slowTimer)
+    if (!now) slow.value = false
+    else if (!slow.value) slowTimer = setTimeout(() => { slow.value = true }, SLOW_AFTER_MS)
+  })
   const solveMs = ref(0)
   const resultSeq = ref(0)
   let worker: Worker | null = null
@@ -123,21 +137,40 @@ export function useSolveWorker(options: { debounceMs?: number, loadData?: (name:
     worker.postMessage({ seq: ++latest, document, ...(Object.keys(dataSets).length ? { dataSets } : {}), ...(networks ? { networks } : {}) })
   }
 
+  // Evaluated values and problems of the newest reply with a result, shown one task after its plot.
+  let deferred: SolveReply | null = null
+
+  function showDetails(reply: SolveReply) {
+    evaluated.value = reply.evaluated
+    // An empty list for an empty list would only make everything that lists problems run again.
+    if (reply.problems.length || problems.value.length) problems.value = reply.problems
+  }
+
+  function showDeferred() {
+    const reply = deferred
+    deferred = null
+    if (reply) showDetails(reply)
+  }
+
   function receive(reply: SolveReply) {
     inFlight = false
     if (pending) { send(); return } // a newer document is waiting: this reply is already stale
     busy.value = false
     if (reply.seq !== latest) return
-    evaluated.value = reply.evaluated
-    // An empty list for an empty list would only make everything that lists problems run again.
-    if (reply.problems.length || problems.value.length) problems.value = reply.problems
     solveMs.value = reply.solveMs
     if (reply.result) {
       result.value = reply.result
       stale.value = false
       resultSeq.value++
+      // The plot redraws first; the inspector and canvas labels (which re-render many elements) a task later.
+      if (!deferred) setTimeout(showDeferred, 0)
+      deferred = reply
     }
-    else stale.value = result.value !== null
+    else {
+      deferred = null
+      showDetails(reply)
+      stale.value = result.value !== null
+    }
   }
 
   /** Ask for a solve of this document. */
@@ -160,9 +193,11 @@ export function useSolveWorker(options: { debounceMs?: number, loadData?: (name:
 
   onBeforeUnmount(() => {
     clearTimeout(timer)
+    clearTimeout(slowTimer)
+    deferred = null
     worker?.terminate()
     worker = null
   })
 
-  return { result, stale, problems, evaluated, busy, solveMs, resultSeq, request, refresh }
+  return { result, stale, problems, evaluated, busy, slow, solveMs, resultSeq, request, refresh }
 }

@@ -95,7 +95,9 @@ export const useEditorStore = defineStore('editor', () => {
       doc.value = d
       lastOrigin.value = origin
       version.value++
-      history.value = { canUndo: source.canUndo(), canRedo: source.canRedo() }
+      // A new object on every edit would re-render everything that shows undo and redo.
+      const canUndo = source.canUndo(), canRedo = source.canRedo()
+      if (history.value.canUndo !== canUndo || history.value.canRedo !== canRedo) history.value = { canUndo, canRedo }
       dropVanishedSelection()
     })
     history.value = { canUndo: source.canUndo(), canRedo: source.canRedo() }

@@ -1,11 +1,13 @@
 /// <reference lib="webworker" />
 // Solves documents off the main thread so the canvas never waits for the sweep.
-import { JoinPlanCache, prepareNetwork, resolveSweep, solveNetwork, sweepFrequencies } from '../../shared/solver'
+import { EditSolver, JoinPlanCache, prepareNetwork, resolveSweep, sweepFrequencies } from '../../shared/solver'
 import type { DataSet } from '../../shared/solver/types'
 import type { SolveReply, SolveRequest } from './protocol'
 
 // Edits mostly change parameter values, not the join structure, so the join-order search is kept across requests.
 const plans = new JoinPlanCache()
+// A slider drag edits one block again and again: only that block's joins are redone (the rest is kept per frequency).
+const edits = new EditSolver({ plans })
 // Data sets of data blocks, by file name, as the editor sent them.
 const dataSets = new Map<string, DataSet>()
 // Documents of sub-networks by name, as the editor loaded them from the project.
@@ -13,6 +15,8 @@ let networks = new Map<string, unknown>()
 
 function solve(request: SolveRequest): { reply: SolveReply, transfer: Transferable[] } {
   const t0 = performance.now()
+  // New data sets or sub-network documents change blocks whose parameters stay the same: nothing kept may be reused.
+  if (request.dataSets || request.networks) edits.reset()
   for (const [name, data] of Object.entries(request.dataSets ?? {})) dataSets.set(name, data)
   if (request.networks) networks = new Map(Object.entries(request.networks))
   const prepared = prepareNetwork(request.document, { plans, resolveData: name => dataSets.get(name), resolveSubnetwork: ref => networks.get(ref) })
@@ -21,7 +25,7 @@ function solve(request: SolveRequest): { reply: SolveReply, transfer: Transferab
   const sweep = resolveSweep(prepared.network.sweep)
   if (!sweep.ok) return { reply: { ...base, problems: sweep.problems, result: null, solveMs: performance.now() - t0 }, transfer: [] }
   const frequencies = sweepFrequencies(sweep.sweep)
-  const solved = solveNetwork(prepared.network, frequencies)
+  const solved = edits.solve(prepared.network, prepared.evaluated, frequencies)
   if (!solved.ok) return { reply: { ...base, problems: solved.problems, result: null, solveMs: performance.now() - t0 }, transfer: [] }
   const r = solved.result
   const result = { ports: r.ports, impedances: [...r.impedances], frequencies: r.frequencies, re: r.re, im: r.im }

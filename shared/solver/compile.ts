@@ -19,6 +19,11 @@ export interface CompileOptions {
   joinOrder?: JoinOrder
   seed?: number
   plans?: JoinPlanCache
+  /**
+   * Id of a block to join after everything else, for incremental solving: it gets a buffer of
+   * its own, and what the joins before it produce can be kept (see `solveKeeping`).
+   */
+  lastBlock?: string
 }
 
 interface Connection {
@@ -33,6 +38,10 @@ interface Item {
   buffer: number
   /** Intermediate results may hand their buffer on once joined; block and constant buffers may not. */
   pinned: boolean
+  /** Its S never changes (filled once at compile time). */
+  constant?: boolean
+  /** Already joined into another item. */
+  consumed?: boolean
 }
 
 interface DynamicBlock {
@@ -77,6 +86,12 @@ export class CompiledNetwork implements NestedNetwork {
   readonly stepCount: number
   /** Whether the join order came from `plans` instead of a fresh search. */
   readonly planReused: boolean
+  /** The blocks and wires it was compiled from (to compile again with another join order). */
+  readonly blocks: readonly CompileBlock[]
+  readonly wires: ReadonlyArray<readonly [string, string]>
+  /** With `lastBlock`: the block joined last and the number of steps before its first join. */
+  readonly lastBlock: string | undefined
+  readonly keptSteps: number
 
   private readonly bufRe: Float64Array[] = []
   private readonly bufIm: Float64Array[] = []
@@ -93,8 +108,21 @@ export class CompiledNetwork implements NestedNetwork {
   /** Generated kernels may replace the generic ones once the process has done enough generic work. */
   private generationPending: boolean
   private lastFailureSingular = false
+  /** The last block's fill entry, and the buffers alive before its first join with their values per chunk. */
+  private readonly lastEntry: DynamicBlock | undefined
+  private readonly keptBuffers: number[] = []
+  /** Junctions at the last block's nets: their S follows its terminals' references, so they are refilled with it. */
+  private readonly lastJunctions: DynamicBlock[] = []
+  private keptRe: Float64Array[][] = []
+  private keptIm: Float64Array[][] = []
+  private keptFrequencies: Float64Array | undefined
+  /** The kept buffers' own arrays, put back after `solveKeeping` so other solves never write over what is kept. */
+  private ownRe: Float64Array[] = []
+  private ownIm: Float64Array[] = []
 
   constructor(blocks: CompileBlock[], wires: ReadonlyArray<readonly [string, string]>, options: CompileOptions = {}) {
+    this.blocks = blocks
+    this.wires = wires
     const layout = terminalLayout(blocks)
     const nets = groupNets(layout, wires)
     const kept = blocksReachingPorts(blocks, layout, nets)
@@ -105,20 +133,50 @@ export class CompiledNetwork implements NestedNetwork {
 
     const space = new Workspace(this.bufRe, this.bufIm, layout.count)
     let reciprocal = true
+    let lastSockets: Set<number> | undefined
+    let lastEntry: DynamicBlock | undefined
     blocks.forEach((block, b) => {
       if (!kept(b) || block.instance.port) return
       reciprocal &&= block.instance.reciprocal
-      const dynamic = space.addBlock(block, layout.base[b]!)
-      if (dynamic) this.dynamic.push(dynamic)
+      const last = block.id === options.lastBlock
+      const dynamic = space.addBlock(block, layout.base[b]!, last)
+      if (last) {
+        lastEntry = dynamic
+        lastSockets = new Set(Array.from({ length: block.instance.terminals }, (_, t) => layout.base[b]! + t))
+      }
+      else if (dynamic) this.dynamic.push(dynamic)
     })
     this.reciprocal = reciprocal
-    this.connections = connectNets(blocks, layout, nets.filter(members => kept(layout.blockOf[members[0]!]!)), space)
+    this.lastEntry = lastEntry
+    this.lastBlock = lastEntry ? options.lastBlock : undefined
+    const lastNets = lastEntry && lastSockets ? { sockets: lastSockets, instance: () => lastEntry!.instance, junctions: this.lastJunctions } : undefined
+    this.connections = connectNets(blocks, layout, nets.filter(members => kept(layout.blockOf[members[0]!]!)), space, lastNets)
+    // With a last block, the joins that do not touch it come first and are planned on their own.
+    const early = this.connections.map((_, c) => c).filter(c => !lastSockets?.has(this.connections[c]!.a) && !lastSockets?.has(this.connections[c]!.b))
+    const late = lastSockets ? this.connections.map((_, c) => c).filter(c => lastSockets!.has(this.connections[c]!.a) || lastSockets!.has(this.connections[c]!.b)) : []
     const plan = planJoinOrder(
-      { items: space.items.map(item => item.sockets), connections: this.connections, socketCount: space.nextSocket, order: options.joinOrder, seed: options.seed },
+      { items: space.items.map(item => item.sockets), connections: early.map(c => this.connections[c]!), socketCount: space.nextSocket, order: options.joinOrder, seed: options.seed },
       options.plans,
     )
     this.planReused = plan.reused
-    this.steps = recordSteps(space, this.connections, plan.order)
+    this.steps = recordSteps(space, this.connections, plan.order.map(c => early[c]!))
+    this.keptSteps = this.steps.length
+    if (this.lastEntry) {
+      // Everything alive now is kept between solves, so the joins after this point must not write over it.
+      const alive = space.items.filter(item => !item.consumed && item.sockets.length > 0)
+      for (const item of alive) item.pinned = true
+      const refilled = new Set([this.lastEntry.buffer, ...this.lastJunctions.map(j => j.buffer)])
+      this.keptBuffers = [...new Set(alive.filter(item => !item.constant && !refilled.has(item.buffer)).map(item => item.buffer))]
+      this.ownRe = this.keptBuffers.map(buffer => this.bufRe[buffer]!)
+      this.ownIm = this.keptBuffers.map(buffer => this.bufIm[buffer]!)
+      this.forgetKept()
+      // The last joins are planned on what is left, so the block meets its small junctions before the large rest.
+      const lastPlan = planJoinOrder(
+        { items: alive.map(item => item.sockets), connections: late.map(c => this.connections[c]!), socketCount: space.nextSocket, order: options.joinOrder, seed: options.seed },
+        options.plans,
+      )
+      this.steps.push(...recordSteps(space, this.connections, lastPlan.order.map(c => late[c]!)))
+    }
     this.generationPending = codeGenerationAllowed()
     this.stepCount = this.steps.length
 
@@ -143,6 +201,16 @@ export class CompiledNetwork implements NestedNetwork {
           : -1
       }
     }
+  }
+
+  /** Frequencies solved together. */
+  get chunkSize(): number {
+    return CHUNK
+  }
+
+  /** Numbers (real and imaginary parts) `solveKeeping` keeps per chunk of frequencies. */
+  get keptNumbersPerChunk(): number {
+    return this.keptBuffers.reduce((sum, buffer) => sum + 2 * this.bufRe[buffer]!.length, 0)
   }
 
   /** Why the last solve failed. */
@@ -177,11 +245,77 @@ export class CompiledNetwork implements NestedNetwork {
     return true
   }
 
+  /**
+   * As `solveFrequencies`, for a network compiled with `lastBlock`. The first call (or one at
+   * other frequencies, or after `forgetKept`) joins everything and keeps what the joins before
+   * the last block produced, per frequency; later calls fill only the last block (give its
+   * new instance, same terminals and references) and replay the joins that involve it.
+   * Returns false (see `failure`) at the first frequency that cannot be solved.
+   */
+  solveKeeping(frequencies: Float64Array, re: Float64Array, im: Float64Array, lastInstance?: BlockInstance): boolean {
+    const entry = this.lastEntry
+    if (!entry) return this.solveFrequencies(frequencies, re, im)
+    if (lastInstance) entry.instance = lastInstance
+    const reuse = this.keptFrequencies !== undefined && sameNumbers(this.keptFrequencies, frequencies)
+    if (!reuse) this.forgetKept()
+    this.fillJunctions()
+    try {
+      if (!this.keepRuns(entry, frequencies, re, im, reuse)) {
+        if (!reuse) this.forgetKept()
+        return false
+      }
+    }
+    finally {
+      this.keptBuffers.forEach((buffer, i) => {
+        this.bufRe[buffer] = this.ownRe[i]!
+        this.bufIm[buffer] = this.ownIm[i]!
+      })
+    }
+    if (!reuse) this.keptFrequencies = Float64Array.from(frequencies)
+    return true
+  }
+
+  private keepRuns(entry: DynamicBlock, frequencies: Float64Array, re: Float64Array, im: Float64Array, reuse: boolean): boolean {
+    const nn = this.ports * this.ports
+    const { bufRe, bufIm, keptBuffers } = this
+    for (let start = 0, chunk = 0; start < frequencies.length; start += CHUNK, chunk++) {
+      const count = Math.min(CHUNK, frequencies.length - start)
+      // Kept buffers are swapped in per chunk: the full run writes straight into them, a reuse reads them.
+      for (let i = 0; i < keptBuffers.length; i++) {
+        const buffer = keptBuffers[i]!
+        if (!reuse) {
+          this.keptRe[i]!.push(new Float64Array(bufRe[buffer]!.length))
+          this.keptIm[i]!.push(new Float64Array(bufIm[buffer]!.length))
+        }
+        bufRe[buffer] = this.keptRe[i]![chunk]!
+        bufIm[buffer] = this.keptIm[i]![chunk]!
+      }
+      const ok = reuse
+        ? this.fillBlock(entry, frequencies, start, count) && this.replay(frequencies, start, count, this.keptSteps, re, im, start * nn)
+        : this.solveRun(frequencies, start, count, re, im, start * nn)
+      if (!ok) return false
+    }
+    return true
+  }
+
+  /** Drops what `solveKeeping` kept, so that its next call joins everything again. */
+  forgetKept(): void {
+    this.keptFrequencies = undefined
+    this.keptRe = this.keptBuffers.map(() => [])
+    this.keptIm = this.keptBuffers.map(() => [])
+  }
+
   private solveRun(frequencies: Float64Array, start: number, count: number, re: Float64Array, im: Float64Array, offset: number): boolean {
-    const { bufRe, bufIm, reciprocal, scratch } = this
-    if (this.generationPending && generationDue(count * this.steps.length)) this.useGeneratedKernels()
     if (!this.fillBlocks(frequencies, start, count)) return false
-    for (const step of this.steps) {
+    return this.replay(frequencies, start, count, 0, re, im, offset)
+  }
+
+  /** Runs the join steps from `first` on and gathers the ports' entries. */
+  private replay(frequencies: Float64Array, start: number, count: number, first: number, re: Float64Array, im: Float64Array, offset: number): boolean {
+    const { bufRe, bufIm, reciprocal, scratch, steps } = this
+    if (this.generationPending && generationDue(count * (steps.length - first))) this.useGeneratedKernels()
+    for (let s = first; s < steps.length; s++) {
+      const step = steps[s]!
       const { a, b, out, generated } = step
       const failed = generated
         ? generated(bufRe[a]!, bufIm[a]!, bufRe[b]!, bufIm[b]!, bufRe[out]!, bufIm[out]!, count)
@@ -210,24 +344,43 @@ export class CompiledNetwork implements NestedNetwork {
 
   /** Writes every frequency-dependent block's S into its buffer slots for this run. */
   private fillBlocks(frequencies: Float64Array, start: number, count: number): boolean {
-    for (const entry of this.dynamic) {
-      const n2 = entry.instance.terminals * entry.instance.terminals
-      const targetRe = this.bufRe[entry.buffer]!, targetIm = this.bufIm[entry.buffer]!
-      for (let q = 0; q < count; q++) {
-        const frequency = frequencies[start + q]!
-        if (!entry.instance.fill(frequency, entry.re, entry.im)) {
-          this.lastFailureSingular = false
-          this.lastFailure = entry.instance.failure?.() ?? {
-            block: entry.id,
-            frequency,
-            message: `block ${entry.id} cannot be evaluated at ${formatQuantity(frequency, 'frequency')}`,
-          }
-          return false
+    for (const entry of this.dynamic) if (!this.fillBlock(entry, frequencies, start, count)) return false
+    return this.fillLast(frequencies, start, count)
+  }
+
+  /** Fills the last block and the junctions at its nets, if there is a last block. */
+  private fillLast(frequencies: Float64Array, start: number, count: number): boolean {
+    if (!this.lastEntry) return true
+    this.fillJunctions()
+    return this.fillBlock(this.lastEntry, frequencies, start, count)
+  }
+
+  /** Junction S depends on references only, not frequency: filled once into every slot. Their buffers are never swapped or written by joins. */
+  private fillJunctions(): void {
+    for (const entry of this.lastJunctions) {
+      entry.instance.fill(0, entry.re, entry.im)
+      spread(entry.re, entry.im, this.bufRe[entry.buffer]!, this.bufIm[entry.buffer]!, CHUNK)
+    }
+  }
+
+  /** Writes one block's S into its buffer slots for this run. */
+  private fillBlock(entry: DynamicBlock, frequencies: Float64Array, start: number, count: number): boolean {
+    const n2 = entry.instance.terminals * entry.instance.terminals
+    const targetRe = this.bufRe[entry.buffer]!, targetIm = this.bufIm[entry.buffer]!
+    for (let q = 0; q < count; q++) {
+      const frequency = frequencies[start + q]!
+      if (!entry.instance.fill(frequency, entry.re, entry.im)) {
+        this.lastFailureSingular = false
+        this.lastFailure = entry.instance.failure?.() ?? {
+          block: entry.id,
+          frequency,
+          message: `block ${entry.id} cannot be evaluated at ${formatQuantity(frequency, 'frequency')}`,
         }
-        for (let e = 0; e < n2; e++) {
-          targetRe[e * CHUNK + q] = entry.re[e]!
-          targetIm[e * CHUNK + q] = entry.im[e]!
-        }
+        return false
+      }
+      for (let e = 0; e < n2; e++) {
+        targetRe[e * CHUNK + q] = entry.re[e]!
+        targetIm[e * CHUNK + q] = entry.im[e]!
       }
     }
     return true
@@ -322,15 +475,25 @@ class Workspace {
       this.constants.set(key, buffer)
       spread(re, im, this.re[buffer]!, this.im[buffer]!, CHUNK)
     }
-    return this.addItem(sockets, buffer, true)
+    const item = this.addItem(sockets, buffer, true)
+    item.constant = true
+    return item
   }
 
-  /** Adds a block's item; returns what must be filled per frequency, if anything. */
-  addBlock(block: CompileBlock, base: number): DynamicBlock | undefined {
+  /**
+   * Adds a block's item; returns what must be filled per frequency, if anything. An `own`
+   * block (one to be refilled alone later) always gets a buffer of its own and is filled.
+   */
+  addBlock(block: CompileBlock, base: number, own = false): DynamicBlock | undefined {
     const { instance } = block
     const n = instance.terminals
     const sockets = Array.from({ length: n }, (_, t) => base + t)
     const re = new Float64Array(n * n), im = new Float64Array(n * n)
+    if (own) {
+      const buffer = this.addBuffer(n)
+      this.addItem(sockets, buffer, true)
+      return { instance, buffer, id: block.id, re, im }
+    }
     if (instance.constant) {
       instance.fill(0, re, im)
       this.constantItem(sockets, re, im)
@@ -366,7 +529,7 @@ class Workspace {
  * alone with one terminal of its reference makes that terminal external, an open terminal
  * meets a constant Γ = 1, and anything else goes through an ideal junction.
  */
-function connectNets(blocks: readonly CompileBlock[], layout: TerminalLayout, nets: readonly number[][], space: Workspace): Connection[] {
+function connectNets(blocks: readonly CompileBlock[], layout: TerminalLayout, nets: readonly number[][], space: Workspace, last?: LastNets): Connection[] {
   const connections: Connection[] = []
   const instanceOf = (t: number) => blocks[layout.blockOf[t]!]!.instance
   const refOf = (t: number): number => {
@@ -374,6 +537,10 @@ function connectNets(blocks: readonly CompileBlock[], layout: TerminalLayout, ne
     return instance.port ? instance.port.impedance : instance.refs[t - layout.base[layout.blockOf[t]!]!]!
   }
   for (const members of nets) {
+    if (last && members.length > 1 && members.some(t => last.sockets.has(t))) {
+      connectThroughJunction(members, last, refOf, instanceOf, space, (a, b) => connections.push({ a, b, node: members.map(layout.name).join(', '), blocks: [...new Set(members.map(t => blocks[layout.blockOf[t]!]!.id))] }), layout)
+      continue
+    }
     const elements = members.filter(t => !instanceOf(t).port)
     const portsHere = members.filter(t => instanceOf(t).port)
     const node = members.map(layout.name).join(', ')
@@ -410,6 +577,49 @@ function connectNets(blocks: readonly CompileBlock[], layout: TerminalLayout, ne
   return connections
 }
 
+/** The last block's terminals (junction sockets at its nets are added), its current instance, and the junctions made there. */
+interface LastNets {
+  sockets: Set<number>
+  instance: () => BlockInstance
+  junctions: DynamicBlock[]
+}
+
+/**
+ * Joins a net of the last block through an ideal junction filled at solve time from the
+ * references then: a new value of the block may change its references, and with them whether
+ * the net needs a junction at all (with equal references the junction passes waves unchanged).
+ */
+function connectThroughJunction(
+  members: number[], last: LastNets, refOf: (t: number) => number, instanceOf: (t: number) => BlockInstance,
+  space: Workspace, connect: (a: number, b: number) => void, layout: TerminalLayout,
+): void {
+  const n = members.length
+  const sockets = members.map(() => space.nextSocket++)
+  const lastBase = Math.min(...[...last.sockets].filter(t => t < layout.count))
+  const refs = members.map(t => (last.sockets.has(t) ? () => last.instance().refs[t - lastBase]! : () => refOf(t)))
+  const instance: BlockInstance = {
+    terminals: n, refs: new Float64Array(n), reciprocal: true, constant: false,
+    fill(_frequency, re, im) {
+      let total = 0
+      for (let i = 0; i < n; i++) total += 1 / refs[i]!()
+      for (let i = 0; i < n; i++) {
+        for (let j = 0; j < n; j++) re[i * n + j] = (2 * Math.sqrt(1 / refs[i]!() / refs[j]!())) / total - (i === j ? 1 : 0)
+      }
+      im.fill(0)
+      return true
+    },
+  }
+  const buffer = space.addBuffer(n)
+  space.addItem(sockets, buffer, true)
+  last.junctions.push({ instance, buffer, id: layout.name(members[0]!), re: new Float64Array(n * n), im: new Float64Array(n * n) })
+  members.forEach((t, i) => {
+    last.sockets.add(sockets[i]!)
+    const port = instanceOf(t).port
+    if (port) space.externalPort[sockets[i]!] = port.index - 1
+    else connect(t, sockets[i]!)
+  })
+}
+
 /** Records each join of the chosen order as a step over fixed buffers. */
 function recordSteps(space: Workspace, connections: readonly Connection[], sequence: readonly number[]): Step[] {
   const { items, socketItem } = space
@@ -424,12 +634,15 @@ function recordSteps(space: Workspace, connections: readonly Connection[], seque
       const sockets = ix.sockets.filter((_, i) => i !== k && i !== l)
       const out = space.addItem(sockets, space.acquire(sockets.length), false)
       steps.push({ kind: LOOP, a: ix.buffer, m: ix.sockets.length, k, b: 0, n: 0, l, out: out.buffer, connection: c })
+      ix.consumed = true
       space.release(ix)
     } else {
       const l = iy.sockets.indexOf(b)
       const sockets = [...ix.sockets.filter((_, i) => i !== k), ...iy.sockets.filter((_, i) => i !== l)]
       const out = space.addItem(sockets, space.acquire(sockets.length), false)
       steps.push({ kind: MERGE, a: ix.buffer, m: ix.sockets.length, k, b: iy.buffer, n: iy.sockets.length, l, out: out.buffer, connection: c })
+      ix.consumed = true
+      iy.consumed = true
       space.release(ix)
       space.release(iy)
     }
@@ -443,4 +656,11 @@ function spread(re: Float64Array, im: Float64Array, targetRe: Float64Array, targ
     targetRe.fill(re[e]!, e * stride, (e + 1) * stride)
     targetIm.fill(im[e]!, e * stride, (e + 1) * stride)
   }
+}
+
+/** Whether two arrays hold the same numbers. */
+function sameNumbers(a: Float64Array, b: Float64Array): boolean {
+  if (a.length !== b.length) return false
+  for (let i = 0; i < a.length; i++) if (a[i] !== b[i]) return false
+  return true
 }

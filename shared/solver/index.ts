@@ -37,3 +37,4 @@ export function solveDocument(input: unknown, options: SolveDocumentOptions = {}
   if (!solved.ok) return { ok: false, problems: solved.problems, evaluated: prepared.evaluated }
   return { ok: true, result: solved.result, evaluated: prepared.evaluated }
 }
+export { EditSolver, type EditSolverOptions, type EditSolveMode } from './incremental'

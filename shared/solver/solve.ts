@@ -62,7 +62,7 @@ export function solveNetwork(network: PreparedNetwork, frequencies: Float64Array
 type Compiled = PreparedNetwork['compiled']
 
 /** Block models used outside their ranges at these frequencies, as warnings naming the block. */
-function notesFor(network: PreparedNetwork, frequencies: Float64Array): Problem[] {
+export function notesFor(network: PreparedNetwork, frequencies: Float64Array): Problem[] {
   let highest = -Infinity
   for (const f of frequencies) highest = Math.max(highest, f)
   return network.notes

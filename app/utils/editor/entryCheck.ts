@@ -7,7 +7,7 @@
 import type { NetworkDocument, ParamValue } from '~~/shared/network/types'
 import { evaluateQuantity } from '~~/shared/network/expression'
 import { evaluateParams, type QuantityParamSpec } from '~~/shared/network/params'
-import { evaluateVariables } from '~~/shared/network/variables'
+import { evaluateVariables, type VariablesOutcome } from '~~/shared/network/variables'
 import { formatQuantity } from '~~/shared/network/format-quantity'
 import { DOCUMENT_LIMITS } from '~~/shared/network/limits'
 import type { QuantityKind } from '~~/shared/network/quantities'
@@ -78,12 +78,22 @@ function reword(error: string): string {
   return error.replace(/is not a finite number/, 'is too large (or too small) to be a number')
 }
 
+// A slider drag checks entry after entry against the same variables: the last evaluation is kept.
+let lastVariables: { key: string, outcome: VariablesOutcome } | undefined
+
+/** The document's variables evaluated, reused while they stay the same. */
+function variablesOf(doc: NetworkDocument): VariablesOutcome {
+  const key = JSON.stringify(doc.variables ?? {})
+  if (lastVariables?.key !== key) lastVariables = { key, outcome: evaluateVariables(doc.variables) }
+  return lastVariables.outcome
+}
+
 function quantity(doc: NetworkDocument, text: string, spec: QuantityParamSpec, label: string): EntryOutcome {
   const bad = finite(text, label)
   if (bad) return bad
   const value = readParamInput(text)
   if (value === undefined) return { ok: false, message: `${label} is empty: enter a value such as ${EXAMPLES[spec.kind]}` }
-  const vars = evaluateVariables(doc.variables)
+  const vars = variablesOf(doc)
   const outcome = evaluateParams('entry', 'entry', { v: value }, { v: spec }, { scope: vars.scope, failed: vars.failed, referenceImpedance: 50 })
   const error = outcome.evaluated.v?.error
   return error ? { ok: false, message: `${label} ${reword(error)}` } : { ok: true, value }
@@ -116,7 +126,7 @@ function checkVariable(doc: NetworkDocument, name: string, text: string, label: 
 function evaluatedSweepEnd(doc: NetworkDocument, field: 'start' | 'stop'): number | undefined {
   const written = doc.sweep?.[field]
   if (written === undefined) return undefined
-  const vars = evaluateVariables(doc.variables)
+  const vars = variablesOf(doc)
   const outcome = evaluateQuantity(written, 'frequency', vars.scope, vars.failed)
   return outcome.ok ? outcome.value : undefined
 }
@@ -133,7 +143,7 @@ function checkSweep(doc: NetworkDocument, field: 'start' | 'stop' | 'points', te
   }
   const outcome = quantity(doc, text, { kind: 'frequency', min: 0 }, label)
   if (!outcome.ok) return outcome
-  const vars = evaluateVariables(doc.variables)
+  const vars = variablesOf(doc)
   const value = evaluateQuantity(outcome.value!, 'frequency', vars.scope, vars.failed)
   if (!value.ok) return { ok: false, message: `${label} ${value.error}` }
   const other = evaluatedSweepEnd(doc, field === 'start' ? 'stop' : 'start')
