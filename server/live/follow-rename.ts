@@ -53,7 +53,7 @@ export async function followNetworkRename(input: { projectId: string, networkId:
   const rewritten: Array<{ id: string, name: string }> = []
   for (const { id } of using) {
     const rows = await db.query<{ name: string, document: NetworkDocument, revision: number, updated_by: string | null }>(
-      'SELECT name, document, revision, updated_by FROM networks WHERE id = $1 FOR UPDATE', { bind: [id], type: QueryTypes.SELECT, transaction },
+      'SELECT name, document, revision, updated_by FROM networks WHERE id = $1 FOR NO KEY UPDATE', { bind: [id], type: QueryTypes.SELECT, transaction },
     )
     const row = rows[0]
     if (!row) continue

@@ -113,8 +113,10 @@ export async function mergeLiveState(networkId: string, options: { final?: boole
     }
     doc.destroy()
     const lastAuthor = [...updates].reverse().find(u => u.userId)?.userId ?? null
+    // NO KEY UPDATE, not UPDATE: the log's foreign key takes KEY SHARE on this row, so a plain FOR UPDATE
+    // would hold every incoming edit of the network until the merge commits.
     const before = await db.query<{ document: NetworkDocument, revision: number, updated_by: string | null, name: string, project_id: string }>(
-      'SELECT document, revision, updated_by, name, project_id FROM networks WHERE id = $1 FOR UPDATE', { bind: [networkId], type: QueryTypes.SELECT, transaction },
+      'SELECT document, revision, updated_by, name, project_id FROM networks WHERE id = $1 FOR NO KEY UPDATE', { bind: [networkId], type: QueryTypes.SELECT, transaction },
     )
     const changed = await db.query<{ revision: number }>(
       `UPDATE networks SET document = $2::jsonb, name = COALESCE(NULLIF($3, ''), name), revision = revision + 1,
