@@ -7,7 +7,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import type { Page } from 'playwright-core'
 import { butlerMatrix4x4 } from '../../shared/examples/index'
 import { appUrl } from '../support/app'
-import { launchBrowser, screenshot, signIn } from '../support/browser'
+import { screenshot, signedInBrowser } from '../support/browser'
 import { newSignedInUser, TEST_PASSWORD, type ApiClient } from '../support/http'
 
 let page: Page
@@ -32,11 +32,9 @@ describe('array view', () => {
     expect(network.status).toBe(201)
     apiPath = `/api/projects/${project.body.id}/networks/${network.body.id}`
     networkPath = `/projects/${project.body.id}/networks/${network.body.id}`
-    const browser = await launchBrowser()
+    const browser = await signedInBrowser(user.email, TEST_PASSWORD, { width: 1500, height: 1100 })
     page = browser.page
     close = browser.close
-    await page.setViewportSize({ width: 1500, height: 1100 })
-    await signIn(page, user.email, TEST_PASSWORD)
   })
   afterAll(async () => { await close?.() })
 

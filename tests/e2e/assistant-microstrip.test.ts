@@ -6,8 +6,7 @@
  */
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import type { Page } from 'playwright-core'
-import { appUrl } from '../support/app'
-import { launchBrowser, screenshot, signIn } from '../support/browser'
+import { screenshot, signedInBrowser, createNetworkInProject } from '../support/browser'
 
 let page: Page
 let close: () => Promise<void>
@@ -15,21 +14,14 @@ const board = 'Quillmere QL-350 0.508 mm'
 
 describe('quadrature assistant in microstrip', () => {
   beforeAll(async () => {
-    const browser = await launchBrowser()
+    const browser = await signedInBrowser('ines@quillmere.example', 'quillmere-demo-2026', { width: 1500, height: 950 })
     page = browser.page
     close = browser.close
-    await page.setViewportSize({ width: 1500, height: 950 })
-    await signIn(page, 'ines@quillmere.example', 'quillmere-demo-2026')
   })
   afterAll(async () => { await close?.() })
 
   it('places the hybrid on a library board with tee junctions, and the Spec view says it meets its spec', async () => {
-    await page.goto(appUrl('/'))
-    await page.click('text=Beam-switch feed, S-band')
-    await page.click('[data-testid="new-network"]')
-    await page.fill('[data-testid="network-name"]', `Microstrip hybrid ${Date.now()}`)
-    await page.click('[data-testid="network-create"]')
-    await page.waitForURL(/\/networks\//)
+    await createNetworkInProject(page, 'Beam-switch feed, S-band', `Microstrip hybrid ${Date.now()}`)
     await page.click('[data-testid="open-assistant"]')
     await page.selectOption('[data-testid="assistant-kind"]', 'quadrature')
     await page.fill('[data-testid="assistant-frequency"]', '2.45 GHz')

@@ -8,7 +8,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import type { Page } from 'playwright-core'
 import { appUrl } from '../support/app'
-import { launchBrowser, screenshot, signIn } from '../support/browser'
+import { screenshot, signedInBrowser } from '../support/browser'
 import { EXAMPLES } from '~~/shared/examples/index'
 
 let page: Page
@@ -49,10 +49,9 @@ const viewTransform = () => page.evaluate(() => (document.querySelector('.vue-fl
 
 describe('the fitted view of the canvas', () => {
   beforeAll(async () => {
-    const browser = await launchBrowser()
+    const browser = await signedInBrowser('ines@quillmere.example', 'quillmere-demo-2026')
     page = browser.page
     close = browser.close
-    await signIn(page, 'ines@quillmere.example', 'quillmere-demo-2026')
     const projects = await api<Array<{ id: string, name: string }>>('/api/projects')
     projectId = projects.find(p => p.name === 'Beam-switch feed, S-band')!.id
   })

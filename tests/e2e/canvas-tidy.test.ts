@@ -7,7 +7,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import type { Page } from 'playwright-core'
 import { appUrl } from '../support/app'
-import { launchBrowser, screenshot, signIn } from '../support/browser'
+import { screenshot, signedInBrowser } from '../support/browser'
 import { countCrossings, polylineOfPath } from '~~/app/utils/editor/wireCrossings'
 import { routeJunctions } from '~~/app/utils/editor/wireRoutes'
 import { wireKey } from '~~/app/utils/editor/documentOps'
@@ -36,10 +36,9 @@ async function drawnWires(): Promise<Array<Array<readonly [number, number]>>> {
 
 describe('tidy on the canvas', () => {
   beforeAll(async () => {
-    const browser = await launchBrowser()
+    const browser = await signedInBrowser('ines@quillmere.example', 'quillmere-demo-2026')
     page = browser.page
     close = browser.close
-    await signIn(page, 'ines@quillmere.example', 'quillmere-demo-2026')
     const projects = await api<Array<{ id: string, name: string }>>('/api/projects')
     projectId = projects.find(p => p.name === 'Beam-switch feed, S-band')!.id
   })

@@ -7,8 +7,7 @@
 import { mkdirSync } from 'node:fs'
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import type { Page } from 'playwright-core'
-import { appUrl } from '../support/app'
-import { launchBrowser, signIn } from '../support/browser'
+import { launchBrowser, signIn, createNetworkInProject } from '../support/browser'
 
 const shots = 'test-results/coediting'
 let ines: Page
@@ -31,12 +30,7 @@ describe('live co-editing in the browser', () => {
   afterAll(async () => { for (const close of closers) await close() })
 
   it('two people see each other\'s changes and presence', async () => {
-    await ines.goto(appUrl('/'))
-    await ines.click('text=Beam-switch feed, S-band')
-    await ines.click('[data-testid="new-network"]')
-    await ines.fill('[data-testid="network-name"]', `Co-editing check ${Date.now()}`)
-    await ines.click('[data-testid="network-create"]')
-    await ines.waitForURL(/\/networks\//)
+    await createNetworkInProject(ines, 'Beam-switch feed, S-band', `Co-editing check ${Date.now()}`)
     await ines.waitForSelector('[data-testid="live-status"][data-status="live"]')
 
     await tomas.goto(ines.url())

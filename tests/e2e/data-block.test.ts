@@ -12,7 +12,7 @@ import { solveDocument } from '../../shared/solver'
 import { readTouchstone } from '../../shared/touchstone/read'
 import { writeTouchstone } from '../../shared/touchstone/write'
 import { appUrl } from '../support/app'
-import { launchBrowser, screenshot, signIn } from '../support/browser'
+import { screenshot, signedInBrowser } from '../support/browser'
 import { fileForm, newSignedInUser, TEST_PASSWORD } from '../support/http'
 
 let page: Page
@@ -67,11 +67,9 @@ describe('data files and sub-networks in the editor', () => {
       expect(answer.status).toBe(201)
       ids[name] = answer.body.id
     }
-    const browser = await launchBrowser()
+    const browser = await signedInBrowser(email, TEST_PASSWORD, { width: 1500, height: 950 })
     page = browser.page
     close = browser.close
-    await page.setViewportSize({ width: 1500, height: 950 })
-    await signIn(page, email, TEST_PASSWORD)
   })
   afterAll(async () => { await close?.() })
 
@@ -152,11 +150,9 @@ describe('data files and sub-networks in the editor', () => {
   it('opens the demo balanced amplifier read-only for a reviewer, matched where one stage is not', async () => {
     // Ines reviews the demo project: no rail, the data file cannot be changed, the page still solves.
     await close()
-    const browser = await launchBrowser()
+    const browser = await signedInBrowser('ines@quillmere.example', 'quillmere-demo-2026', { width: 1500, height: 950 })
     page = browser.page
     close = browser.close
-    await page.setViewportSize({ width: 1500, height: 950 })
-    await signIn(page, 'ines@quillmere.example', 'quillmere-demo-2026')
     await page.goto(appUrl('/'))
     await page.click('text=Balanced LNA hybrids')
     await page.click('text=Balanced amplifier (invented LNA data)')

@@ -13,7 +13,7 @@ import { readTouchstone } from '../../shared/touchstone/read'
 import { writeTouchstone } from '../../shared/touchstone/write'
 import { SAFETY_NOTE } from '../../shared/solver/safety-note'
 import { appUrl } from '../support/app'
-import { launchBrowser, screenshot, signIn } from '../support/browser'
+import { screenshot, signedInBrowser } from '../support/browser'
 import { newSignedInUser, TEST_PASSWORD } from '../support/http'
 
 let page: Page
@@ -42,11 +42,9 @@ describe('a measured part from upload to exported Touchstone', () => {
     const network = await client.post(`/api/projects/${projectId}/networks`, { name: 'Amplifier round trip', document: twoPorts })
     expect(network.status).toBe(201)
     networkId = network.body.id
-    const browser = await launchBrowser()
+    const browser = await signedInBrowser(email, TEST_PASSWORD, { width: 1500, height: 950 })
     page = browser.page
     close = browser.close
-    await page.setViewportSize({ width: 1500, height: 950 })
-    await signIn(page, email, TEST_PASSWORD)
   })
   afterAll(async () => { await close?.() })
 

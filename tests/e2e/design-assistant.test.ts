@@ -6,8 +6,7 @@
 import { mkdirSync } from 'node:fs'
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import type { Page } from 'playwright-core'
-import { appUrl } from '../support/app'
-import { launchBrowser, signIn } from '../support/browser'
+import { signedInBrowser, createNetworkInProject } from '../support/browser'
 
 const shots = 'test-results/design-assistant'
 let page: Page
@@ -20,21 +19,14 @@ function readNumber(text: string | null): number {
 describe('design assistant', () => {
   beforeAll(async () => {
     mkdirSync(shots, { recursive: true })
-    const browser = await launchBrowser()
+    const browser = await signedInBrowser('ines@quillmere.example', 'quillmere-demo-2026', { width: 1500, height: 950 })
     page = browser.page
     close = browser.close
-    await page.setViewportSize({ width: 1500, height: 950 })
-    await signIn(page, 'ines@quillmere.example', 'quillmere-demo-2026')
   })
   afterAll(async () => { await close?.() })
 
   it('previews a two-section quadrature hybrid, places it, and the placed network splits −3.01 dB at f0', async () => {
-    await page.goto(appUrl('/'))
-    await page.click('text=Beam-switch feed, S-band')
-    await page.click('[data-testid="new-network"]')
-    await page.fill('[data-testid="network-name"]', `Assistant check ${Date.now()}`)
-    await page.click('[data-testid="network-create"]')
-    await page.waitForURL(/\/networks\//)
+    await createNetworkInProject(page, 'Beam-switch feed, S-band', `Assistant check ${Date.now()}`)
     await page.click('[data-testid="open-assistant"]')
     await page.selectOption('[data-testid="assistant-kind"]', 'quadrature')
     await page.fill('[data-testid="assistant-frequency"]', '2.45 GHz')

@@ -7,8 +7,7 @@
 import { mkdirSync } from 'node:fs'
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import type { Page } from 'playwright-core'
-import { appUrl } from '../support/app'
-import { launchBrowser, signIn } from '../support/browser'
+import { signedInBrowser, createNetworkInProject } from '../support/browser'
 
 const shots = 'test-results/editor'
 let page: Page
@@ -60,21 +59,14 @@ function expectQuadratureSplit(s21: { db: number, deg: number }, s31: { db: numb
 describe('network editor', () => {
   beforeAll(async () => {
     mkdirSync(shots, { recursive: true })
-    const browser = await launchBrowser()
+    const browser = await signedInBrowser('ines@quillmere.example', 'quillmere-demo-2026', { width: 1500, height: 950 })
     page = browser.page
     close = browser.close
-    await page.setViewportSize({ width: 1500, height: 950 })
-    await signIn(page, 'ines@quillmere.example', 'quillmere-demo-2026')
   })
   afterAll(async () => { await close?.() })
 
   it('builds a branch-line hybrid from the rail and inspector, reads it, and keeps it after a reload', async () => {
-    await page.goto(appUrl('/'))
-    await page.click('text=Beam-switch feed, S-band')
-    await page.click('[data-testid="new-network"]')
-    await page.fill('[data-testid="network-name"]', `Branch-line check ${Date.now()}`)
-    await page.click('[data-testid="network-create"]')
-    await page.waitForURL(/\/networks\//)
+    await createNetworkInProject(page, 'Beam-switch feed, S-band', `Branch-line check ${Date.now()}`)
     await page.waitForSelector('[data-testid="rail-port"]')
 
     // The centre frequency: a variable f0 on a sweep that has it as a point.

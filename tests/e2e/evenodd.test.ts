@@ -9,7 +9,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import type { Page } from 'playwright-core'
 import ring from '../../shared/examples/ring-hybrid.json'
 import { appUrl } from '../support/app'
-import { launchBrowser, screenshot, signIn } from '../support/browser'
+import { screenshot, signedInBrowser } from '../support/browser'
 
 let page: Page
 let close: () => Promise<void>
@@ -34,11 +34,9 @@ async function openNetwork(id: string) {
 
 describe('even/odd view', () => {
   beforeAll(async () => {
-    const browser = await launchBrowser()
+    const browser = await signedInBrowser('ines@quillmere.example', 'quillmere-demo-2026', { width: 1500, height: 950 })
     page = browser.page
     close = browser.close
-    await page.setViewportSize({ width: 1500, height: 950 })
-    await signIn(page, 'ines@quillmere.example', 'quillmere-demo-2026')
     const projects = await api<Array<{ id: string, name: string }>>('/api/projects')
     projectId = projects.find(p => p.name === 'Beam-switch feed, S-band')!.id
   })

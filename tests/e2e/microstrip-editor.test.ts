@@ -7,8 +7,7 @@
 import { mkdirSync } from 'node:fs'
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import type { Page } from 'playwright-core'
-import { appUrl } from '../support/app'
-import { launchBrowser, signIn } from '../support/browser'
+import { signedInBrowser, createNetworkInProject } from '../support/browser'
 
 const shots = 'test-results/microstrip'
 let page: Page
@@ -22,21 +21,14 @@ async function select(id: string) {
 describe('microstrip in the editor', () => {
   beforeAll(async () => {
     mkdirSync(shots, { recursive: true })
-    const browser = await launchBrowser()
+    const browser = await signedInBrowser('ines@quillmere.example', 'quillmere-demo-2026', { width: 1500, height: 950 })
     page = browser.page
     close = browser.close
-    await page.setViewportSize({ width: 1500, height: 950 })
-    await signIn(page, 'ines@quillmere.example', 'quillmere-demo-2026')
   })
   afterAll(async () => { await close?.() })
 
   it('places a microstrip, edits its substrate and sizes it with the line calculator', async () => {
-    await page.goto(appUrl('/'))
-    await page.click('text=Beam-switch feed, S-band')
-    await page.click('[data-testid="new-network"]')
-    await page.fill('[data-testid="network-name"]', `Microstrip check ${Date.now()}`)
-    await page.click('[data-testid="network-create"]')
-    await page.waitForURL(/\/networks\//)
+    await createNetworkInProject(page, 'Beam-switch feed, S-band', `Microstrip check ${Date.now()}`)
     await page.waitForSelector('[data-testid="rail-microstrip"]')
 
     for (const kind of ['port', 'port', 'microstrip']) await page.click(`[data-testid="rail-${kind}"]`)

@@ -8,7 +8,7 @@ import type { Page } from 'playwright-core'
 import { branchLineTuning } from '../../shared/examples/index'
 import { prepareTuning, resolveTolerances, runTrials } from '../../shared/tuning/index'
 import { appUrl } from '../support/app'
-import { launchBrowser, screenshot, signIn } from '../support/browser'
+import { screenshot, signedInBrowser } from '../support/browser'
 import { newSignedInUser, TEST_PASSWORD } from '../support/http'
 
 let page: Page
@@ -24,11 +24,9 @@ describe('server runs and spreads in the tune panel', () => {
     expect(network.status).toBe(201)
     networkPath = `/projects/${project.body.id}/networks/${network.body.id}`
     worker = spawn(process.execPath, ['--import', 'tsx', 'scripts/worker.ts'], { cwd: process.cwd(), stdio: 'ignore', env: { ...process.env, NUXT_DATABASE_URL: process.env.PORTWRIGHT_TEST_DATABASE_URL! } })
-    const browser = await launchBrowser()
+    const browser = await signedInBrowser(email, TEST_PASSWORD, { width: 1500, height: 1000 })
     page = browser.page
     close = browser.close
-    await page.setViewportSize({ width: 1500, height: 1000 })
-    await signIn(page, email, TEST_PASSWORD)
   })
   afterAll(async () => {
     worker?.kill('SIGTERM')

@@ -6,7 +6,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import type { Page } from 'playwright-core'
 import { appUrl } from '../support/app'
-import { launchBrowser, screenshot, signIn } from '../support/browser'
+import { screenshot, signedInBrowser } from '../support/browser'
 import { fileForm, newSignedInUser, TEST_PASSWORD, type ApiClient } from '../support/http'
 
 // Invented matched pads of our own: |S21| = 0.5 (version 1), then 0.25 (version 2), 1–3 GHz.
@@ -71,11 +71,9 @@ describe('a snapshot shows what it froze', () => {
     const current = await owner.get(`${base}/networks/${innerMade.body.id}`)
     expect((await owner.put(`${base}/networks/${innerMade.body.id}`, { revision: current.body.revision, document: inner(10) })).status).toBe(200)
     expect((await owner.request('PUT', `${base}/files/${file.body.id}`, fileForm('pad.s2p', pad(0.25)))).status).toBe(200)
-    const browser = await launchBrowser()
+    const browser = await signedInBrowser(made.email, TEST_PASSWORD, { width: 1500, height: 950 })
     page = browser.page
     close = browser.close
-    await page.setViewportSize({ width: 1500, height: 950 })
-    await signIn(page, made.email, TEST_PASSWORD)
   })
   afterAll(async () => { await close?.() })
 

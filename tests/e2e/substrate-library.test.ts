@@ -5,18 +5,16 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import type { Page } from 'playwright-core'
 import { appUrl } from '../support/app'
-import { launchBrowser, screenshot, signIn } from '../support/browser'
+import { screenshot, signedInBrowser, createNetworkHere } from '../support/browser'
 
 let page: Page
 let close: () => Promise<void>
 
 describe('substrate library', () => {
   beforeAll(async () => {
-    const browser = await launchBrowser()
+    const browser = await signedInBrowser('ines@quillmere.example', 'quillmere-demo-2026', { width: 1500, height: 950 })
     page = browser.page
     close = browser.close
-    await page.setViewportSize({ width: 1500, height: 950 })
-    await signIn(page, 'ines@quillmere.example', 'quillmere-demo-2026')
   })
   afterAll(async () => { await close?.() })
 
@@ -34,10 +32,7 @@ describe('substrate library', () => {
     await expect.poll(() => page.textContent('[data-testid="substrate-library-list"]')).toContain(name)
     await screenshot(page, 'substrate-library-project')
 
-    await page.click('[data-testid="new-network"]')
-    await page.fill('[data-testid="network-name"]', `Library copy ${Date.now()}`)
-    await page.click('[data-testid="network-create"]')
-    await page.waitForURL(/\/networks\//)
+    await createNetworkHere(page, `Library copy ${Date.now()}`)
     await page.click('[data-testid="open-settings"]')
     await page.click('[data-testid="substrate-library-picker"] summary')
     await page.waitForSelector('[data-testid="library-choice"]')

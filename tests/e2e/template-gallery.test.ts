@@ -7,7 +7,7 @@ import { mkdirSync } from 'node:fs'
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import type { Page } from 'playwright-core'
 import { appUrl } from '../support/app'
-import { launchBrowser, signIn } from '../support/browser'
+import { launchBrowser, signIn, signedInBrowser } from '../support/browser'
 
 const shots = 'test-results/template-gallery'
 let page: Page
@@ -20,11 +20,9 @@ function readNumber(text: string | null): number {
 describe('template gallery', () => {
   beforeAll(async () => {
     mkdirSync(shots, { recursive: true })
-    const browser = await launchBrowser()
+    const browser = await signedInBrowser('ines@quillmere.example', 'quillmere-demo-2026', { width: 1500, height: 950 })
     page = browser.page
     close = browser.close
-    await page.setViewportSize({ width: 1500, height: 950 })
-    await signIn(page, 'ines@quillmere.example', 'quillmere-demo-2026')
   })
   afterAll(async () => { await close?.() })
 

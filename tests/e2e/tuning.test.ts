@@ -7,7 +7,7 @@ import type { Page } from 'playwright-core'
 import { branchLineTuning } from '../../shared/examples/index'
 import { prepareTuning, rankTolerances, resolveTolerances, runTrials } from '../../shared/tuning/index'
 import { appUrl } from '../support/app'
-import { launchBrowser, screenshot, signIn } from '../support/browser'
+import { screenshot, signedInBrowser } from '../support/browser'
 import { newSignedInUser, TEST_PASSWORD } from '../support/http'
 
 let page: Page
@@ -26,11 +26,9 @@ describe('tune and tolerance panel', () => {
     const detuned = await client.post(`/api/projects/${project.body.id}/networks`, { name: 'Branch-line, arms detuned', document: branchLineTuning(true) })
     expect(detuned.status).toBe(201)
     detunedPath = `/projects/${project.body.id}/networks/${detuned.body.id}`
-    const browser = await launchBrowser()
+    const browser = await signedInBrowser(email, TEST_PASSWORD, { width: 1500, height: 950 })
     page = browser.page
     close = browser.close
-    await page.setViewportSize({ width: 1500, height: 950 })
-    await signIn(page, email, TEST_PASSWORD)
   })
   afterAll(async () => { await close?.() })
 

@@ -7,7 +7,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import type { Page } from 'playwright-core'
 import { appUrl } from '../support/app'
-import { launchBrowser, screenshot, signIn } from '../support/browser'
+import { launchBrowser, screenshot, signIn, signedInBrowser } from '../support/browser'
 
 let page: Page
 let close: () => Promise<void>
@@ -60,11 +60,9 @@ async function selectBlock(id: string) {
 
 describe('editor workbench', () => {
   beforeAll(async () => {
-    const browser = await launchBrowser()
+    const browser = await signedInBrowser('ines@quillmere.example', 'quillmere-demo-2026', { width: 1500, height: 950 })
     page = browser.page
     close = browser.close
-    await page.setViewportSize({ width: 1500, height: 950 })
-    await signIn(page, 'ines@quillmere.example', 'quillmere-demo-2026')
     const projects = await api<Array<{ id: string, name: string }>>('/api/projects')
     projectId = projects.find(p => p.name === 'Beam-switch feed, S-band')!.id
   })

@@ -6,7 +6,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import type { Page } from 'playwright-core'
 import { branchLineTuning } from '../../shared/examples/index'
 import { appUrl } from '../support/app'
-import { launchBrowser, screenshot, signIn } from '../support/browser'
+import { screenshot, signedInBrowser } from '../support/browser'
 import { newSignedInUser, TEST_PASSWORD } from '../support/http'
 
 let page: Page
@@ -22,11 +22,9 @@ describe('yield spread on the Response view', () => {
     const network = await client.post(`/api/projects/${project.body.id}/networks`, { name: 'Branch-line with tolerances', document: branchLineTuning(false) })
     expect(network.status).toBe(201)
     networkPath = `/projects/${project.body.id}/networks/${network.body.id}`
-    const browser = await launchBrowser()
+    const browser = await signedInBrowser(email, TEST_PASSWORD, { width: 1500, height: 1000 })
     page = browser.page
     close = browser.close
-    await page.setViewportSize({ width: 1500, height: 1000 })
-    await signIn(page, email, TEST_PASSWORD)
   })
   afterAll(async () => { await close?.() })
 

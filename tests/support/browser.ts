@@ -51,3 +51,26 @@ export async function screenshot(page: Page, name: string): Promise<string> {
   await page.screenshot({ path, fullPage: true })
   return path
 }
+
+/** A browser signed in as one person, at the given window size (the launch default otherwise). */
+export async function signedInBrowser(email: string, password: string, viewport?: { width: number; height: number }): Promise<{ context: BrowserContext; page: Page; close: () => Promise<void> }> {
+  const browser = await launchBrowser()
+  if (viewport) await browser.page.setViewportSize(viewport)
+  await signIn(browser.page, email, password)
+  return browser
+}
+
+/** On a project's page: creates an empty network of that name and waits for its editor. */
+export async function createNetworkHere(page: Page, name: string): Promise<void> {
+  await page.click('[data-testid="new-network"]')
+  await page.fill('[data-testid="network-name"]', name)
+  await page.click('[data-testid="network-create"]')
+  await page.waitForURL(/\/networks\//)
+}
+
+/** From the projects list: opens the project of that name and creates an empty network in it. */
+export async function createNetworkInProject(page: Page, project: string, name: string): Promise<void> {
+  await page.goto(appUrl('/'))
+  await page.click(`text=${project}`)
+  await createNetworkHere(page, name)
+}
