@@ -9,6 +9,7 @@ import type { Evaluated, NetworkDocument, Problem } from '~~/shared/network/type
 import type { SolveReply, SolvedData } from '~~/app/workers/protocol'
 import type { DataSet } from '~~/shared/solver/types'
 import { subnetworkRefs } from '~~/app/utils/editor/externalTerminals'
+import { shareEvaluated } from '~~/app/utils/editor/shareEvaluated'
 
 /** How long a solve runs before `slow` says so. */
 const SLOW_AFTER_MS = 200
@@ -141,7 +142,8 @@ export function useSolveWorker(options: { debounceMs?: number, loadData?: (name:
   let deferred: SolveReply | null = null
 
   function showDetails(reply: SolveReply) {
-    evaluated.value = reply.evaluated
+    // Unchanged values keep their objects, so only what an edit changed is drawn again.
+    evaluated.value = shareEvaluated(evaluated.value, reply.evaluated)
     // An empty list for an empty list would only make everything that lists problems run again.
     if (reply.problems.length || problems.value.length) problems.value = reply.problems
   }
@@ -201,3 +203,6 @@ export function useSolveWorker(options: { debounceMs?: number, loadData?: (name:
 
   return { result, stale, problems, evaluated, busy, slow, solveMs, resultSeq, request, refresh }
 }
+
+/** The solver's state as panels read it: they are handed the whole object, so that each re-renders on what it shows. */
+export type EditorSolve = ReturnType<typeof useSolveWorker>
