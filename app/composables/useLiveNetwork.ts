@@ -11,12 +11,15 @@
  * sent when it is back (y-websocket's sync exchange). For people who may edit,
  * the document is also kept in the browser's IndexedDB (y-indexeddb), so edits
  * made offline survive closing the tab: the next visit opens the kept copy when
- * the live server cannot be reached, and the two merge once it can.
+ * the live server cannot be reached, and the two merge once it can. Both get
+ * local edits when the page is next idle rather than inside the edit
+ * (utils/editor/deferredUpdates.ts), so a slider step is drawn first.
  */
 import { onBeforeUnmount, ref, shallowRef, watch, type InjectionKey, type Ref } from 'vue'
 import * as Y from 'yjs'
 import { WebsocketProvider } from 'y-websocket'
 import { IndexeddbPersistence } from 'y-indexeddb'
+import { deferLocalUpdates } from '~~/app/utils/editor/deferredUpdates'
 import type { NetworkDocument } from '~~/shared/network/types'
 import type { NetworkDto } from '~~/shared/types/api'
 import { createNetworkReader, hasNetwork, NETWORK_ROOT, readNetwork, writeNetwork, writeNetworkChanges } from '~~/shared/live/network-ydoc'
@@ -131,6 +134,13 @@ export function useLiveNetwork(network: NetworkDto, options: LiveNetworkOptions 
   store.readOnly = true
   // The browser's own copy, for people who may edit: edits made offline outlive the tab.
   const kept = mayWrite ? new IndexeddbPersistence(keptDocumentName(network.id), doc) : null
+  // Both write local edits when the page is next idle, not inside the edit (a slider step draws its plot first).
+  const deferred = deferLocalUpdates(doc, kept ? [provider._updateHandler, kept._storeUpdate] : [provider._updateHandler], {
+    immediateOrigins: new Set<unknown>(kept ? [provider, kept] : [provider]),
+  })
+  const flushOnHide = () => { if (document.visibilityState === 'hidden') deferred.flush() }
+  window.addEventListener('pagehide', deferred.flush)
+  document.addEventListener('visibilitychange', flushOnHide)
   let keptReady = false
   kept?.whenSynced.then(() => {
     keptReady = true
@@ -208,6 +218,9 @@ export function useLiveNetwork(network: NetworkDto, options: LiveNetworkOptions 
 
   function dispose() {
     clearTimeout(timeout)
+    window.removeEventListener('pagehide', deferred.flush)
+    document.removeEventListener('visibilitychange', flushOnHide)
+    deferred.dispose()
     provider.destroy()
     source?.destroy()
     // Closing waits for pending IndexedDB writes; destroying the doc afterwards is harmless.

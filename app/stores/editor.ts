@@ -282,9 +282,13 @@ export const useEditorStore = defineStore('editor', () => {
   function undo() { if (!readOnly.value) source.undo() }
   function redo() { if (!readOnly.value) source.redo() }
 
-  /** The document as it is saved and exported: wires to nothing are impossible here. */
+  /**
+   * The document as it is saved, exported and solved: wires to nothing are impossible here. Snapshots are
+   * never changed in place, so a shallow copy with its own wire list is enough: no deep copy on every step
+   * of a slider.
+   */
   function savedDocument(): NetworkDocument {
-    const copy = structuredClone(doc.value) as NetworkDocument
+    const copy = { ...doc.value }
     pruneWires(copy)
     return copy
   }
