@@ -76,11 +76,11 @@ export function addExternalBlock(doc: NetworkDocument, type: 'data' | 'subnetwor
   return id
 }
 
-/** Whether `ref` names an existing terminal of the document. */
-export function terminalExists(doc: NetworkDocument, ref: string): boolean {
+/** Whether `ref` names an existing terminal of the document (or of the blocks found by `find`). */
+export function terminalExists(doc: NetworkDocument, ref: string, find: (id: string) => BlockSpec | undefined = id => doc.blocks.find(b => b.id === id)): boolean {
   const t = parseTerminal(ref)
   if (!t) return false
-  const block = doc.blocks.find(b => b.id === t.block)
+  const block = find(t.block)
   if (!block) return false
   const count = terminalCount(block.type)
   // Blocks whose terminals come from outside data (data sets, sub-networks) cannot be checked here.
@@ -104,9 +104,12 @@ export function disconnect(doc: NetworkDocument, keys: ReadonlySet<string>): voi
 /** Drop wires that touch a missing block or terminal, self-wires and duplicates: a saved wire always joins two real terminals. */
 export function pruneWires(doc: NetworkDocument): void {
   const seen = new Set<string>()
+  // Looked up by id: every edit prunes (the solver gets the pruned document), and a scan per wire end grows with blocks × wires.
+  const byId = new Map(doc.blocks.map(b => [b.id, b]))
+  const find = (id: string) => byId.get(id)
   doc.wires = doc.wires.filter((w) => {
     const key = wireKey(w as Wire)
-    if (w[0] === w[1] || seen.has(key) || !terminalExists(doc, w[0]) || !terminalExists(doc, w[1])) return false
+    if (w[0] === w[1] || seen.has(key) || !terminalExists(doc, w[0], find) || !terminalExists(doc, w[1], find)) return false
     seen.add(key)
     return true
   })
