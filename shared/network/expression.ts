@@ -1,4 +1,4 @@
-import type { MathNode, Unit } from 'mathjs'
+import type { EvalFunction, MathNode, Unit } from 'mathjs'
 import { MAX_EXPRESSION_LENGTH, refuseConstruct } from './expression-allow-list'
 import { formatQuantity } from './format-quantity'
 import { valueMath as math } from './math-instance'
@@ -21,8 +21,38 @@ function normalise(text: string): string {
   return text.replace(/Ω/g, 'ohm').replace(/[µμ]/g, 'u').trim()
 }
 
+/**
+ * Parsed expressions by their text, at most PARSED_KEPT of them, oldest dropped first. Parsing and
+ * checking is most of an evaluation's cost, and the same texts come back at every edit, solve and
+ * tolerance trial. Entries are shared: nobody may change what parseExpression returns.
+ */
+const PARSED_KEPT = 4096
+const parsedByText = new Map<string, ParsedExpression>()
+
 /** Parses an expression string and lists the names it uses, so variable dependencies can be ordered. */
 export function parseExpression(text: string): ParsedExpression {
+  // Texts too long to be read are refused at once, and never kept.
+  if (text.length > MAX_EXPRESSION_LENGTH) return parseFresh(text)
+  const kept = parsedByText.get(text)
+  if (kept) return kept
+  const parsed = parseFresh(text)
+  parsedByText.set(text, parsed)
+  if (parsedByText.size > PARSED_KEPT) parsedByText.delete(parsedByText.keys().next().value!)
+  return parsed
+}
+
+// Compiled once per parsed node: mathjs's node.evaluate compiles afresh at every call.
+const compiledByNode = new WeakMap<MathNode, EvalFunction>()
+function evaluateNode(node: MathNode, scope: Scope): unknown {
+  let compiled = compiledByNode.get(node)
+  if (!compiled) {
+    compiled = node.compile()
+    compiledByNode.set(node, compiled)
+  }
+  return compiled.evaluate(scope)
+}
+
+function parseFresh(text: string): ParsedExpression {
   const source = normalise(text)
   if (!source) return { ok: false, error: 'is empty' }
   if (source.length > MAX_EXPRESSION_LENGTH) return { ok: false, error: `is too long (${MAX_EXPRESSION_LENGTH} characters at most)` }
@@ -94,7 +124,7 @@ export function evaluateQuantity(input: ParamValue, kind: QuantityKind, scope: S
   }
   let raw: unknown
   try {
-    raw = parsed.node.evaluate(scope)
+    raw = evaluateNode(parsed.node, scope)
   } catch (error) {
     return { ok: false, error: `"${input}" cannot be evaluated (${(error as Error).message})` }
   }
@@ -108,7 +138,7 @@ export function evaluateVariableValue(input: ParamValue, scope: Scope): { ok: tr
   if (!parsed.ok) return { ok: false, error: `"${input}" ${parsed.error}` }
   let raw: unknown
   try {
-    raw = parsed.node.evaluate(scope)
+    raw = evaluateNode(parsed.node, scope)
   } catch (error) {
     return { ok: false, error: `"${input}" cannot be evaluated (${(error as Error).message})` }
   }

@@ -52,3 +52,29 @@ describe('display of quantities', () => {
     expect(formatQuantity(0, 'impedance')).toBe('0 Ω')
   })
 })
+
+describe('parsed expressions kept between evaluations', () => {
+  it('evaluates a kept expression against each scope it is given', () => {
+    // One text, two scopes: the kept parse must not keep the first scope's value.
+    const first = evaluateQuantity('2 * Za', 'impedance', new Map([['Za', 20]]))
+    const second = evaluateQuantity('2 * Za', 'impedance', new Map([['Za', 31]]))
+    expect(first).toEqual({ ok: true, value: 40 })
+    expect(second).toEqual({ ok: true, value: 62 })
+  })
+
+  it('gives the same answer for a refused or unreadable text every time', () => {
+    const unreadable = evaluateQuantity('3 +* 4', 'impedance', new Map())
+    expect(evaluateQuantity('3 +* 4', 'impedance', new Map())).toEqual(unreadable)
+    expect(unreadable.ok).toBe(false)
+    const unknown = evaluateQuantity('Zq', 'impedance', new Map())
+    expect(unknown).toEqual({ ok: false, error: '"Zq" uses the unknown name Zq' })
+    expect(evaluateQuantity('Zq', 'impedance', new Map([['Zq', 75]]))).toEqual({ ok: true, value: 75 })
+  })
+
+  it('still refuses a text over the length limit, without keeping it', () => {
+    const long = `${'1+'.repeat(400)}1`
+    const outcome = evaluateQuantity(long, 'impedance', new Map())
+    expect(outcome.ok).toBe(false)
+    expect(outcome.ok ? '' : outcome.error).toContain('too long')
+  })
+})
