@@ -112,13 +112,14 @@ export function responseAxisRange(quantity: Quantity, series: ReadonlyArray<Arra
 
 /**
  * Values as drawn on an axis: anything beyond an edge (±∞ included) sits on
- * that edge; NaN stays a gap (null, as uPlot wants it).
+ * that edge; NaN (or null) stays a gap, as NaN. A typed array: an array mixing
+ * numbers and nulls would box every number, a garbage heap per redrawn trace.
  */
-export function clipToRange(values: ArrayLike<number>, range: AxisRange): Array<number | null> {
-  const out = new Array<number | null>(values.length)
+export function clipToRange(values: ArrayLike<number | null>, range: AxisRange): Float64Array {
+  const out = new Float64Array(values.length)
   for (let k = 0; k < values.length; k++) {
-    const v = values[k]!
-    out[k] = Number.isNaN(v) ? null : v < range.min ? range.min : v > range.max ? range.max : v
+    const v = values[k]
+    out[k] = v === null || v === undefined || Number.isNaN(v) ? Number.NaN : v < range.min ? range.min : v > range.max ? range.max : v
   }
   return out
 }

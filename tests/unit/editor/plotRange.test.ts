@@ -79,6 +79,6 @@ describe('responseAxisRange', () => {
 
 describe('clipToRange', () => {
   it('puts values beyond the axis on its edge and keeps NaN as a gap', () => {
-    expect(clipToRange([-317.5, -3.01, Number.NaN, -Infinity, 12], { min: -80, max: 0 })).toEqual([-80, -3.01, null, -80, 0])
+    expect(Array.from(clipToRange([-317.5, -3.01, Number.NaN, -Infinity, 12, null], { min: -80, max: 0 }))).toEqual([-80, -3.01, Number.NaN, -80, 0, Number.NaN])
   })
 })
