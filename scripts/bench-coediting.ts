@@ -66,6 +66,9 @@ const bases = Array.from({ length: instanceCount }, (_, k) => `http://127.0.0.1:
 const base = bases[0]!
 const profileDir = resolve(dataDir, 'cpu-profiles')
 
+/** A delivery slower than this is listed by update in the report. */
+const SLOW_MS = 100
+
 function percentile(sorted: number[], p: number): number {
   if (!sorted.length) return NaN
   return sorted[Math.min(sorted.length - 1, Math.floor((p / 100) * sorted.length))]!
@@ -104,6 +107,23 @@ async function tableCounters(db: pg.Client) {
   return Object.fromEntries(rows.rows.map(r => [r.relname, { inserted: Number(r.ins), updated: Number(r.upd), deleted: Number(r.del) }]))
 }
 
+/**
+ * Late deliveries grouped by update. An update late at most of its receivers
+ * was held before the fan-out (a pause of the server, the database or this
+ * process); one late at a few was held on those connections.
+ */
+function reportSlow(slow: Map<string, Array<{ client: number, ms: number }>>, sentAt: Map<string, number>, start: number, receivers: number): void {
+  const updates = [...slow.entries()].map(([token, list]) => ({ token, at: (sentAt.get(token)! - start) / 1000, late: list.length, max: Math.max(...list.map(d => d.ms)) }))
+  const total = updates.reduce((n, u) => n + u.late, 0)
+  if (!total) return console.log(`deliveries over ${SLOW_MS} ms: none`)
+  const wide = updates.filter(u => u.late > receivers / 2)
+  const perClient = new Map<number, number>()
+  for (const list of slow.values()) for (const d of list) perClient.set(d.client, (perClient.get(d.client) ?? 0) + 1)
+  const clients = [...perClient.entries()].sort((a, b) => b[1] - a[1])
+  console.log(`deliveries over ${SLOW_MS} ms: ${total} of ${updates.length} updates; ${wide.reduce((n, u) => n + u.late, 0)} of them in ${wide.length} updates late at more than half their receivers; ${clients.length} clients had one or more, most ${clients.slice(0, 5).map(([c, n]) => `client ${c}: ${n}`).join(', ')}`)
+  for (const u of updates.sort((a, b) => a.at - b.at).slice(0, 40)) console.log(`  at ${u.at.toFixed(2)} s update ${u.token}: late at ${u.late} of ${receivers}, max ${u.max.toFixed(0)} ms`)
+}
+
 async function main(): Promise<void> {
   stopCluster(cluster)
   rmSync(dataDir, { recursive: true, force: true })
@@ -134,6 +154,15 @@ async function main(): Promise<void> {
 
     const sentAt = new Map<string, number>()
     const latencies: number[] = []
+    /** Deliveries over SLOW_MS, per update: which clients got it late tells a pause of the server from a slow connection. */
+    const slow = new Map<string, Array<{ client: number, ms: number }>>()
+    const deliver = (token: string, client: number, ms: number) => {
+      latencies.push(ms)
+      if (ms <= SLOW_MS) return
+      const list = slow.get(token) ?? []
+      list.push({ client, ms })
+      slow.set(token, list)
+    }
     const docs: Y.Doc[] = []
     const closes: string[] = []
     let started = false
@@ -151,7 +180,7 @@ async function main(): Promise<void> {
           for (const m of text.matchAll(/w([\s\S])(\d+:\d+)/g)) {
             if (m[1]!.charCodeAt(0) !== m[2]!.length) continue
             const t0 = sentAt.get(m[2]!)
-            if (t0 !== undefined) latencies.push(received - t0)
+            if (t0 !== undefined) deliver(m[2]!, i, received - t0)
           }
         })
         socket.on('close', (code: number, reason: Buffer) => { if (started) closes.push(`client ${i}: ${code} ${reason.toString()}`.trim()) })
@@ -197,7 +226,7 @@ async function main(): Promise<void> {
           // A client's own value, written locally; counting it here would time the next remote update instead.
           if (String(value).startsWith(ownPrefix)) continue
           const t0 = sentAt.get(String(value))
-          if (t0 !== undefined) latencies.push(received - t0)
+          if (t0 !== undefined) deliver(String(value), i, received - t0)
         }
       })
       docs.push(doc)
@@ -276,7 +305,7 @@ async function main(): Promise<void> {
       deliveriesExpected: expected,
       latencyMs: { p50: +percentile(latencies, 50).toFixed(2), p95: +percentile(latencies, 95).toFixed(2), p99: +percentile(latencies, 99).toFixed(2), max: +(latencies.at(-1) ?? NaN).toFixed(2) },
       errors: { connectionsClosed: closes.length, deliveriesMissing: expected - latencies.length, serverWarnings: serverWarnings.length },
-      loadGenerator: { cpuShareOfOneCore: +generatorCpuShare.toFixed(2), eventLoopDelayMs: { p50: +(loopDelay.percentile(50) / 1e6).toFixed(1), p99: +(loopDelay.percentile(99) / 1e6).toFixed(1) } },
+      loadGenerator: { cpuShareOfOneCore: +generatorCpuShare.toFixed(2), eventLoopDelayMs: { p50: +(loopDelay.percentile(50) / 1e6).toFixed(1), p99: +(loopDelay.percentile(99) / 1e6).toFixed(1), max: +(loopDelay.max / 1e6).toFixed(1) } },
       loadAverage: { start: loadAtStart.map(l => +l.toFixed(2)), end: loadAtEnd.map(l => +l.toFixed(2)) },
       commitMs: { p50: +percentile(commits, 50).toFixed(2), p95: +percentile(commits, 95).toFixed(2) },
       serverRssMiB: rss.map(r => ({ start: +r[0]!.toFixed(1), peak: +Math.max(...r).toFixed(1), end: +r.at(-1)!.toFixed(1) })),
@@ -293,9 +322,10 @@ async function main(): Promise<void> {
     for (const w of serverWarnings.slice(0, 5)) console.log(`  ${w}`)
     for (const c of closes.slice(0, 5)) console.log(`  ${c}`)
     console.log(`one committed insert from this client: p50 ${result.commitMs.p50} ms, p95 ${result.commitMs.p95} ms`)
-    console.log(`load average: ${result.loadAverage.start.join(' ')} at start, ${result.loadAverage.end.join(' ')} at end; load generator (all clients, one process): ${Math.round(100 * generatorCpuShare)} % of one core, event-loop delay p99 ${result.loadGenerator.eventLoopDelayMs.p99} ms`)
+    console.log(`load average: ${result.loadAverage.start.join(' ')} at start, ${result.loadAverage.end.join(' ')} at end; load generator (all clients, one process): ${Math.round(100 * generatorCpuShare)} % of one core, event-loop delay p99 ${result.loadGenerator.eventLoopDelayMs.p99} ms, max ${result.loadGenerator.eventLoopDelayMs.max} ms`)
     result.serverRssMiB.forEach((r, k) => console.log(`server ${k + 1} memory (RSS): ${r.start} MiB at start, ${r.peak} MiB peak, ${r.end} MiB at end`))
     console.log(`database rows: ${result.databaseRows.updateLogInserted} update-log inserts, ${result.databaseRows.updateLogDeleted} deleted by merges, ${result.databaseRows.liveStateUpdated} state merges, ${result.databaseRows.networksUpdated} JSON document writes`)
+    reportSlow(slow, sentAt, start, clientCount - 1)
     console.log(JSON.stringify(result))
   } finally {
     // The providers' presence timers would keep Node running after the figures are out.

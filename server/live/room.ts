@@ -14,12 +14,15 @@ import * as decoding from 'lib0/decoding'
 import { NETWORK_ROOT } from '#shared/live/network-ydoc'
 import { checkUpdateOn } from '#shared/live/strict-read'
 import { appendUpdate, loadLiveState, mergeLiveState, publishPresence, readUpdate } from './store'
+import { PRESENCE_BATCH_MS, PresenceBatch, presenceGroups } from './presence-batch'
 
 const MESSAGE_SYNC = 0
 const MESSAGE_AWARENESS = 1
 const MESSAGE_QUERY_AWARENESS = 3
 /** Largest presence state of one client, as JSON characters (a cursor, a selection and a name fit easily). */
 const MAX_PRESENCE_CHARS = 8 * 1024
+/** Awareness bytes per notification to the other instances (PostgreSQL refuses payloads of 8000 bytes; base64 adds a third). */
+const PRESENCE_NOTIFY_BYTES = 5000
 
 /**
  * Close codes the browser composable understands. y-websocket's client gives up
@@ -69,6 +72,9 @@ export class LiveRoom {
   readonly ready: Promise<boolean>
   /** Awareness client ids each peer controls: removed when it leaves, and nobody else may speak for them. */
   private readonly controlled = new Map<LivePeer, Set<number>>()
+  /** The same, from client id to its peer. */
+  private readonly owners = new Map<number, LivePeer>()
+  private readonly presence = new PresenceBatch(PRESENCE_BATCH_MS, (changed, local) => this.sendPresence(changed, local))
   /** Ids of logged updates already in `doc`, so a notification does not fetch them again. */
   private readonly applied = new Set<string>()
   private readonly chains = new Map<LivePeer, Promise<void>>()
@@ -129,6 +135,7 @@ export class LiveRoom {
     this.peers.delete(peer)
     const ids = this.controlled.get(peer)
     this.controlled.delete(peer)
+    for (const id of ids ?? []) this.owners.delete(id)
     if (ids?.size) awarenessProtocol.removeAwarenessStates(this.awareness, [...ids], peer)
     await this.chains.get(peer)
     this.chains.delete(peer)
@@ -216,7 +223,7 @@ export class LiveRoom {
       const clientId = decoding.readVarUint(decoder)
       const clock = decoding.readVarUint(decoder)
       const json = decoding.readVarString(decoder)
-      const owner = [...this.controlled].find(([, ids]) => ids.has(clientId))?.[0]
+      const owner = this.owners.get(clientId)
       if (owner && owner !== peer) continue
       if (clientId === this.doc.clientID) continue
       // One presence per connection, of bounded size: nobody fills the room with states.
@@ -229,9 +236,12 @@ export class LiveRoom {
         continue
       }
       if (state !== null && (typeof state !== 'object' || Array.isArray(state))) continue
-      if (state === null) mine.delete(clientId)
-      else {
+      if (state === null) {
+        mine.delete(clientId)
+        this.owners.delete(clientId)
+      } else {
         mine.add(clientId)
+        this.owners.set(clientId, peer)
         state = { ...state, user: { id: peer.userId, name: peer.name, role: peer.role } }
       }
       entries.push([clientId, clock, JSON.stringify(state)])
@@ -263,12 +273,20 @@ export class LiveRoom {
 
   private broadcastAwareness(change: { added: number[], updated: number[], removed: number[] }, origin: unknown): void {
     const clients = [...change.added, ...change.updated, ...change.removed]
-    if (!clients.length) return
-    const message = this.awarenessMessage(clients)
-    for (const peer of this.peers) peer.send(message)
     // Presence of this instance's peers goes to the other instances; presence that came from them does not go back.
-    if (origin && typeof origin === 'object' && 'userId' in origin) {
-      const update = awarenessProtocol.encodeAwarenessUpdate(this.awareness, clients)
+    const local = !!origin && typeof origin === 'object' && 'userId' in origin
+    this.presence.add(clients, local)
+  }
+
+  /** One awareness message per peer for every change of a batch, and the local ones to the other instances. */
+  private sendPresence(changed: number[], local: number[]): void {
+    const known = changed.filter(id => this.awareness.meta.has(id))
+    if (known.length) {
+      const message = this.awarenessMessage(known)
+      for (const peer of this.peers) peer.send(message)
+    }
+    for (const group of presenceGroups(this.awareness, local, PRESENCE_NOTIFY_BYTES)) {
+      const update = awarenessProtocol.encodeAwarenessUpdate(this.awareness, group)
       publishPresence(this.options.instanceId, this.networkId, update).catch((error) => {
         console.warn(`[live] presence not published: ${(error as Error).message}`)
       })
@@ -352,6 +370,9 @@ export class LiveRoom {
 
   destroy(): void {
     if (this.mergeTimer) clearTimeout(this.mergeTimer)
+    // Departures still go to the other instances, which would otherwise show these peers until their presence times out.
+    this.presence.flush()
+    this.presence.dispose()
     this.awareness.destroy()
     this.doc.destroy()
   }

@@ -9,6 +9,7 @@ import type { ChildProcess } from 'node:child_process'
 import pg from 'pg'
 import WebSocket from 'ws'
 import * as encoding from 'lib0/encoding'
+import * as decoding from 'lib0/decoding'
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import type { NetworkDocument } from '../../shared/network/types'
 import { startServer, stopProcess } from '../../scripts/lib/server-process'
@@ -267,6 +268,63 @@ describe('live co-editing', () => {
     expect(seen.selection).toEqual(['HERE'])
     await closeAll([here, there])
     await stopProcess(other)
+  })
+
+  it('sends presence in batches stamped with each sender\'s name, and nobody speaks for a client id another connection holds', async () => {
+    const networkId = await newNetwork('Presence batches')
+    const address = `${liveServerUrl(appUrl())}/${networkId}`
+    const open = (cookie: string) => new Promise<WebSocket>((done, fail) => {
+      const socket = new WebSocket(address, { headers: { cookie, origin: appUrl() } })
+      socket.once('open', () => done(socket))
+      socket.once('error', fail)
+    })
+    /** Awareness messages as [client id, clock, state] entries, one array per message. */
+    const received: Array<Array<[number, number, Record<string, unknown> | null]>> = []
+    const observer = await open(team.owner.cookie)
+    observer.on('message', (data: Buffer) => {
+      const decoder = decoding.createDecoder(new Uint8Array(data))
+      if (decoding.readVarUint(decoder) !== 1) return
+      const update = decoding.createDecoder(decoding.readVarUint8Array(decoder))
+      const entries: Array<[number, number, Record<string, unknown> | null]> = []
+      for (let n = decoding.readVarUint(update); n > 0; n--) {
+        entries.push([decoding.readVarUint(update), decoding.readVarUint(update), JSON.parse(decoding.readVarString(update))])
+      }
+      received.push(entries)
+    })
+    const presence = (clientId: number, clock: number, state: unknown) => {
+      const update = encoding.createEncoder()
+      encoding.writeVarUint(update, 1)
+      encoding.writeVarUint(update, clientId)
+      encoding.writeVarUint(update, clock)
+      encoding.writeVarString(update, JSON.stringify(state))
+      const message = encoding.createEncoder()
+      encoding.writeVarUint(message, 1)
+      encoding.writeVarUint8Array(message, encoding.toUint8Array(update))
+      return encoding.toUint8Array(message)
+    }
+    const senders = await Promise.all(Array.from({ length: 30 }, () => open(team.editor.cookie)))
+    // Everyone renews at once, as clients that joined together do; each claims to be someone else.
+    senders.forEach((socket, k) => socket.send(presence(5000 + k, 1, { selection: [`B${k}`], user: { name: 'Somebody Else', role: 'owner' } })))
+    const latest = () => new Map(received.flat().map(([id, clock, state]) => [id, { clock, state }]))
+    await until('30 presences at the observer', () => [...latest().keys()].filter(id => id >= 5000 && id < 5030).length === 30)
+    // Sent one message per change before; a batch carries many (the window is 50 ms: a few batches, more only on a slow machine).
+    expect(received.length).toBeLessThanOrEqual(10)
+    for (const [id, { state }] of latest()) {
+      if (id < 5000 || id >= 5030) continue
+      expect(state?.selection).toEqual([`B${id - 5000}`])
+      expect(state?.user).toMatchObject({ name: 'Live Editor', role: 'editor' })
+    }
+    // Client 5000 belongs to the first connection: a second connection's state for it never arrives.
+    senders[1]!.send(presence(5000, 2, { selection: ['TAKEN'] }))
+    senders[0]!.send(presence(5000, 3, { selection: ['MINE'] }))
+    await until('the owner\'s renewal', () => latest().get(5000)?.clock === 3)
+    expect(received.flat().some(([, , state]) => JSON.stringify(state).includes('TAKEN'))).toBe(false)
+    // Leaving removes the states, in batches too.
+    const before = received.length
+    for (const socket of senders) socket.close()
+    await until('presences removed', () => [...latest()].filter(([id, { state }]) => id >= 5000 && id < 5030 && state === null).length === 30)
+    expect(received.length - before).toBeLessThanOrEqual(10)
+    observer.close()
   })
 
   it('keeps every edit through a kill -9 of the server in the middle of a burst', async () => {
