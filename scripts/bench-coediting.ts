@@ -8,14 +8,16 @@
  * memory, errors (closed connections, missing deliveries, server warnings),
  * the load generator's own CPU use and the rows the database wrote.
  *
- *   PORTWRIGHT_BUILD_NAME=live npx tsx scripts/bench-coediting.ts [--clients 50] [--rate 20] [--seconds 60] [--instances 1] [--writers N] [--light] [--profile]
+ *   PORTWRIGHT_BUILD_NAME=live npx tsx scripts/bench-coediting.ts [--clients 50] [--rate 20] [--seconds 60] [--instances 1] [--writers N] [--light] [--processes 1] [--profile]
  *
  * --writers N: only the first N clients edit (all of them by default); the
  * others only receive. --light: those receiving-only clients are bare
  * websockets that keep no Yjs document (they find each edit's value in the
  * bytes they receive and renew a presence every 15 s, as a browser does), so
  * that hundreds of them cost the load generator little: the server does the
- * same work for them as for full clients.
+ * same work for them as for full clients. --processes N: the clients run in N
+ * load-generator processes (client i in process i mod N), each its own event
+ * loop; latencies are taken from wall-clock times, sent and received.
  *
  * PORTWRIGHT_BENCH_PORT (default 5960; instance k listens on port + k) and
  * PORTWRIGHT_BENCH_DB_PORT (default 56360) choose the ports. --profile runs the
@@ -25,19 +27,13 @@ import { readFileSync, rmSync } from 'node:fs'
 import { randomBytes } from 'node:crypto'
 import { loadavg } from 'node:os'
 import { resolve } from 'node:path'
-import { monitorEventLoopDelay } from 'node:perf_hooks'
-import type { ChildProcess } from 'node:child_process'
+import { fork, type ChildProcess } from 'node:child_process'
 import pg from 'pg'
-import * as Y from 'yjs'
-import { WebsocketProvider } from 'y-websocket'
-import WebSocket from 'ws'
-import * as encoding from 'lib0/encoding'
 import { ensureCluster, startCluster, stopCluster, ensureDatabase, databaseUrl, type Cluster } from './lib/postgres'
 import { prepareDatabase } from './lib/database-setup'
 import { buildIfStale } from './lib/build'
 import { startServer, stopProcess } from './lib/server-process'
-import { readNetwork, writeNetwork } from '../shared/live/network-ydoc'
-import { webSocketWithHeaders } from '../tests/support/live'
+import type { ClientsPlan, ClientsResult, FromClients, ToClients } from './lib/coediting-clients'
 import { summariseCpuProfiles } from './lib/cpu-profile-summary'
 
 function arg(name: string, fallback: number): number {
@@ -57,6 +53,8 @@ const profile = process.argv.includes('--profile')
  */
 const writerCount = Math.min(clientCount, Math.max(1, Math.floor(arg('writers', clientCount))))
 const light = process.argv.includes('--light')
+/** Load-generator processes: one event loop for 200 full Yjs clients falls behind, and would time itself. */
+const processCount = Math.max(1, Math.min(clientCount, Math.floor(arg('processes', 1))))
 const variableSlots = Math.min(writerCount, 100)
 const root = resolve(import.meta.dirname, '..')
 const appPort = Number(process.env.PORTWRIGHT_BENCH_PORT ?? 5960)
@@ -65,6 +63,38 @@ const cluster: Cluster = { dataDir: resolve(dataDir, 'postgres'), port: Number(p
 const bases = Array.from({ length: instanceCount }, (_, k) => `http://127.0.0.1:${appPort + k}`)
 const base = bases[0]!
 const profileDir = resolve(dataDir, 'cpu-profiles')
+
+interface Generator {
+  process: ChildProcess
+  ready: Promise<void>
+  result: Promise<ClientsResult>
+  exited: Promise<void>
+}
+
+/** Forks one load-generator process (scripts/lib/coediting-clients.ts) and hands it its clients. */
+function startGenerator(plan: ClientsPlan): Generator {
+  const child = fork(resolve(import.meta.dirname, 'lib', 'coediting-clients.ts'), [], { execArgv: ['--import', 'tsx'], cwd: root })
+  const exited = new Promise<void>(done => child.once('exit', () => done()))
+  let onReady: () => void = () => {}
+  let onResult: (r: ClientsResult) => void = () => {}
+  let onFailure: (e: Error) => void = () => {}
+  const ready = new Promise<void>((done, fail) => { onReady = done; onFailure = fail })
+  const result = new Promise<ClientsResult>((done, fail) => {
+    onResult = done
+    const failBoth = onFailure
+    onFailure = (error) => { failBoth(error); fail(error) }
+  })
+  // A failure before the result is asked for must not go unhandled.
+  result.catch(() => {})
+  child.on('message', (message: FromClients) => {
+    if (message.type === 'ready') onReady()
+    else if (message.type === 'result') onResult(message.result)
+    else onFailure(new Error(`load generator failed: ${message.message}`))
+  })
+  child.once('exit', code => onFailure(new Error(`load generator exited (${code}) before its result`)))
+  child.send({ type: 'plan', plan } satisfies ToClients)
+  return { process: child, ready, result, exited }
+}
 
 /** A delivery slower than this is listed by update in the report. */
 const SLOW_MS = 100
@@ -130,7 +160,7 @@ async function main(): Promise<void> {
   ensureCluster(cluster)
   await startCluster(cluster)
   const servers: ChildProcess[] = []
-  const providers: WebsocketProvider[] = []
+  const generators: Generator[] = []
   try {
     await ensureDatabase(cluster, 'portwright')
     const url = databaseUrl(cluster, 'portwright')
@@ -152,7 +182,6 @@ async function main(): Promise<void> {
     const project = projects.find(p => p.name.startsWith('Beam-switch')) ?? projects[0]!
     const network = await api<{ id: string }>(cookie, `/api/projects/${project.id}/networks`, { name: `Co-editing load ${Date.now()}` })
 
-    const sentAt = new Map<string, number>()
     const latencies: number[] = []
     /** Deliveries over SLOW_MS, per update: which clients got it late tells a pause of the server from a slow connection. */
     const slow = new Map<string, Array<{ client: number, ms: number }>>()
@@ -163,118 +192,36 @@ async function main(): Promise<void> {
       list.push({ client, ms })
       slow.set(token, list)
     }
-    const docs: Y.Doc[] = []
-    const closes: string[] = []
-    let started = false
-    const lightSockets: WebSocket[] = []
-    const presenceTimers: Array<ReturnType<typeof setInterval>> = []
-    for (let i = 0; i < clientCount; i++) {
-      if (light && i >= writerCount) {
-        const home = bases[i % instanceCount]!
-        const socket = new WebSocket(`${home.replace('http', 'ws')}/live/networks/${network.id}`, { headers: { cookie, origin: home } })
-        socket.binaryType = 'nodebuffer'
-        socket.on('message', (data: Buffer) => {
-          const received = performance.now()
-          // An edit's value travels as a Yjs string: type byte 119 ('w'), its length, then the text.
-          const text = data.toString('latin1')
-          for (const m of text.matchAll(/w([\s\S])(\d+:\d+)/g)) {
-            if (m[1]!.charCodeAt(0) !== m[2]!.length) continue
-            const t0 = sentAt.get(m[2]!)
-            if (t0 !== undefined) deliver(m[2]!, i, received - t0)
-          }
-        })
-        socket.on('close', (code: number, reason: Buffer) => { if (started) closes.push(`client ${i}: ${code} ${reason.toString()}`.trim()) })
-        const clientId = 1_000_000 + i
-        let clock = 0
-        const presence = () => {
-          if (socket.readyState !== WebSocket.OPEN) return
-          const update = encoding.createEncoder()
-          encoding.writeVarUint(update, 1)
-          encoding.writeVarUint(update, clientId)
-          encoding.writeVarUint(update, ++clock)
-          encoding.writeVarString(update, '{}')
-          const message = encoding.createEncoder()
-          encoding.writeVarUint(message, 1) // awareness
-          encoding.writeVarUint8Array(message, encoding.toUint8Array(update))
-          socket.send(encoding.toUint8Array(message))
-        }
-        socket.on('open', presence)
-        presenceTimers.push(setInterval(presence, 15_000))
-        lightSockets.push(socket)
-        continue
-      }
-      const doc = new Y.Doc()
-      const home = bases[i % instanceCount]!
-      const provider = new WebsocketProvider(`${home.replace('http', 'ws')}/live/networks`, network.id, doc, {
-        WebSocketPolyfill: webSocketWithHeaders({ cookie, origin: home }) as unknown as typeof globalThis.WebSocket,
-        disableBc: true,
-      })
-      provider.on('connection-close', (event: { code: number, reason: string } | null) => {
-        if (started) closes.push(`client ${i}: ${event?.code ?? '?'} ${event?.reason ?? ''}`.trim())
-      })
-      const seen = new Map<string, unknown>()
-      const ownPrefix = `${i}:`
-      doc.on('update', (_u: Uint8Array, origin: unknown) => {
-        if (origin !== provider) return
-        const received = performance.now()
-        // Straight to the variables' value map (see shared/live/network-ydoc.ts): the receiving side of
-        // the measurement should cost the load generator as little as possible.
-        const vars = ((doc.getMap('network').get('v') as Y.Map<unknown>).get('variables') as Y.Map<unknown>).get('v') as Y.Map<unknown>
-        for (const [key, value] of vars.entries()) {
-          if (!key.startsWith('c') || seen.get(key) === value) continue
-          seen.set(key, value)
-          // A client's own value, written locally; counting it here would time the next remote update instead.
-          if (String(value).startsWith(ownPrefix)) continue
-          const t0 = sentAt.get(String(value))
-          if (t0 !== undefined) deliver(String(value), i, received - t0)
-        }
-      })
-      docs.push(doc)
-      providers.push(provider)
-    }
-    const deadline = Date.now() + 20_000
-    while (!providers.every(p => p.synced) || !lightSockets.every(s => s.readyState === WebSocket.OPEN)) {
-      if (Date.now() > deadline) throw new Error('clients did not sync within 20 s')
-      await new Promise(r => setTimeout(r, 50))
-    }
+    // Client i runs in generator process i mod processes, so writers and receivers are spread over them all.
+    const plans: ClientsPlan[] = Array.from({ length: processCount }, (_, k) => ({
+      cookie, bases, networkId: network.id, writerCount, variableSlots, light, rate, seconds,
+      clients: Array.from({ length: clientCount }, (_, i) => i).filter(i => i % processCount === k),
+    }))
+    for (const plan of plans) generators.push(startGenerator(plan))
+    await Promise.all(generators.map(g => g.ready))
     const db = new pg.Client({ connectionString: url })
     await db.connect()
     const before = await tableCounters(db)
     const rss: number[][] = pids.map(pid => [rssMiB(pid)])
     const memTimer = setInterval(() => pids.forEach((pid, k) => rss[k]!.push(rssMiB(pid))), 1000)
     const loadAtStart = loadavg()
-    // The clients share this process: its own CPU use and event-loop delay are part of every latency measured.
-    const loopDelay = monitorEventLoopDelay({ resolution: 10 })
-    loopDelay.enable()
-    const cpuAtStart = process.cpuUsage()
-    const wallAtStart = performance.now()
-    started = true
-
-    const total = Math.round(rate * seconds)
-    const interval = 1000 / rate
-    const start = performance.now()
-    for (let n = 0; n < total; n++) {
-      const wait = start + n * interval - performance.now()
-      if (wait > 0) await new Promise(r => setTimeout(r, wait))
-      const i = n % writerCount
-      const doc = docs[i]!
-      const token = `${i}:${n}`
-      const next = readNetwork(doc)
-      next.variables = { ...next.variables, [`c${i % variableSlots}`]: token }
-      sentAt.set(token, performance.now())
-      doc.transact(() => writeNetwork(doc, next))
-    }
-    await new Promise(r => setTimeout(r, 2000))
+    const startAt = performance.timeOrigin + performance.now() + 500
+    for (const g of generators) g.process.send({ type: 'go', startAt } satisfies ToClients)
+    const outcomes = await Promise.all(generators.map(g => g.result))
     clearInterval(memTimer)
-    loopDelay.disable()
-    const cpu = process.cpuUsage(cpuAtStart)
-    const generatorCpuShare = (cpu.user + cpu.system) / 1000 / (performance.now() - wallAtStart)
     const loadAtEnd = loadavg()
-    started = false
+    const total = Math.round(rate * seconds)
     const expected = total * (clientCount - 1)
-    for (const p of providers) p.destroy()
-    for (const t of presenceTimers) clearInterval(t)
-    for (const s of lightSockets) s.close()
+    const sentAt = new Map(outcomes.flatMap(o => o.sent))
+    for (const o of outcomes) {
+      o.received.tokens.forEach((token, k) => {
+        const t0 = sentAt.get(token)
+        if (t0 !== undefined) deliver(token, o.received.clients[k]!, o.received.times[k]! - t0)
+      })
+    }
+    const closes = outcomes.flatMap(o => o.closes)
+    for (const g of generators) g.process.send({ type: 'stop' } satisfies ToClients)
+    await Promise.all(generators.map(g => g.exited))
     // The last client out triggers the final merge; give it a moment before reading the counters.
     await new Promise(r => setTimeout(r, 3000))
     const after = await tableCounters(db)
@@ -305,7 +252,7 @@ async function main(): Promise<void> {
       deliveriesExpected: expected,
       latencyMs: { p50: +percentile(latencies, 50).toFixed(2), p95: +percentile(latencies, 95).toFixed(2), p99: +percentile(latencies, 99).toFixed(2), max: +(latencies.at(-1) ?? NaN).toFixed(2) },
       errors: { connectionsClosed: closes.length, deliveriesMissing: expected - latencies.length, serverWarnings: serverWarnings.length },
-      loadGenerator: { cpuShareOfOneCore: +generatorCpuShare.toFixed(2), eventLoopDelayMs: { p50: +(loopDelay.percentile(50) / 1e6).toFixed(1), p99: +(loopDelay.percentile(99) / 1e6).toFixed(1), max: +(loopDelay.max / 1e6).toFixed(1) } },
+      loadGenerator: outcomes.map(o => ({ cpuShareOfOneCore: +o.cpuShareOfOneCore.toFixed(2), eventLoopDelayMs: { p99: +o.eventLoopDelayMs.p99.toFixed(1), max: +o.eventLoopDelayMs.max.toFixed(1) } })),
       loadAverage: { start: loadAtStart.map(l => +l.toFixed(2)), end: loadAtEnd.map(l => +l.toFixed(2)) },
       commitMs: { p50: +percentile(commits, 50).toFixed(2), p95: +percentile(commits, 95).toFixed(2) },
       serverRssMiB: rss.map(r => ({ start: +r[0]!.toFixed(1), peak: +Math.max(...r).toFixed(1), end: +r.at(-1)!.toFixed(1) })),
@@ -322,17 +269,13 @@ async function main(): Promise<void> {
     for (const w of serverWarnings.slice(0, 5)) console.log(`  ${w}`)
     for (const c of closes.slice(0, 5)) console.log(`  ${c}`)
     console.log(`one committed insert from this client: p50 ${result.commitMs.p50} ms, p95 ${result.commitMs.p95} ms`)
-    console.log(`load average: ${result.loadAverage.start.join(' ')} at start, ${result.loadAverage.end.join(' ')} at end; load generator (all clients, one process): ${Math.round(100 * generatorCpuShare)} % of one core, event-loop delay p99 ${result.loadGenerator.eventLoopDelayMs.p99} ms, max ${result.loadGenerator.eventLoopDelayMs.max} ms`)
+    console.log(`load average: ${result.loadAverage.start.join(' ')} at start, ${result.loadAverage.end.join(' ')} at end; load generator (${processCount} process${processCount > 1 ? 'es' : ''}): ${result.loadGenerator.map(g => `${Math.round(100 * g.cpuShareOfOneCore)} % of one core, event-loop delay p99 ${g.eventLoopDelayMs.p99} ms, max ${g.eventLoopDelayMs.max} ms`).join('; ')}`)
     result.serverRssMiB.forEach((r, k) => console.log(`server ${k + 1} memory (RSS): ${r.start} MiB at start, ${r.peak} MiB peak, ${r.end} MiB at end`))
     console.log(`database rows: ${result.databaseRows.updateLogInserted} update-log inserts, ${result.databaseRows.updateLogDeleted} deleted by merges, ${result.databaseRows.liveStateUpdated} state merges, ${result.databaseRows.networksUpdated} JSON document writes`)
-    reportSlow(slow, sentAt, start, clientCount - 1)
+    reportSlow(slow, sentAt, startAt, clientCount - 1)
     console.log(JSON.stringify(result))
   } finally {
-    // The providers' presence timers would keep Node running after the figures are out.
-    for (const p of providers) {
-      p.destroy()
-      p.awareness.destroy()
-    }
+    for (const g of generators) g.process.kill()
     await Promise.all(servers.map(s => stopProcess(s, 15_000)))
     if (profile) summariseCpuProfiles(profileDir)
     stopCluster(cluster)
