@@ -11,7 +11,7 @@ import { evaluateQuantity } from '../shared/network/expression'
 import { formatQuantity } from '../shared/network/format-quantity'
 import { resolveSpec } from '../shared/network/spec'
 import { prepareNetwork, solveNetwork } from '../shared/solver/index'
-import { cliPrepareOptions, fail, readDocument } from './network-cli'
+import { cliPrepareOptions, endQuietlyWhenOutputCloses, fail, readDocument } from './network-cli'
 import { portListOption, positiveNumberOption } from './option-values'
 
 const USAGE = 'usage: npm run -s beams -- FILE.json --inputs 1,2,… --outputs 5,6,… --spacing WAVELENGTHS [--frequency F]'
@@ -87,4 +87,5 @@ function main(): void {
   process.stdout.write(`${JSON.stringify(output)}\n`)
 }
 
+endQuietlyWhenOutputCloses()
 main()

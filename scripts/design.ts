@@ -4,7 +4,7 @@
  * frequency and a spec. Bad input exits with status 2, one line per problem naming the option.
  */
 import { DESIGN_ASSISTANTS, DESIGN_KINDS, isDesignKind, isSubstrateOption, runDesign, SUBSTRATE_OPTIONS } from '../shared/design/index'
-import { fail } from './network-cli'
+import { endQuietlyWhenOutputCloses, fail } from './network-cli'
 
 function usage(): string {
   return [
@@ -43,4 +43,5 @@ function main(): void {
   process.stdout.write(`${JSON.stringify(outcome.document, null, 2)}\n`)
 }
 
+endQuietlyWhenOutputCloses()
 main()

@@ -11,7 +11,7 @@ import { parseArgs } from 'node:util'
 import { lineFigures } from '../shared/microstrip/line-figures'
 import type { MicrostripSubstrate } from '../shared/microstrip/types'
 import type { QuantityKind } from '../shared/network/quantities'
-import { fail, quantityOption } from './network-cli'
+import { endQuietlyWhenOutputCloses, fail, quantityOption } from './network-cli'
 
 const USAGE = 'usage: npm run -s line -- --permittivity ER --height H (--width W | --impedance Z) [--thickness T] [--frequency F] [--degrees D] [--loss-tangent TD] [--conductivity S] [--roughness R]'
 
@@ -90,4 +90,5 @@ function main(): void {
   process.stdout.write(`${JSON.stringify(output)}\n`)
 }
 
+endQuietlyWhenOutputCloses()
 main()

@@ -1,5 +1,5 @@
 /**
- * What the `solve` and `bench` commands share: reading a document, loading its
+ * What the command-line tools share: reading a document, loading its
  * subnetworks relative to the file that names them, sweep overrides and problem output.
  */
 import { existsSync, readFileSync, statSync } from 'node:fs'
@@ -10,6 +10,18 @@ import type { Problem } from '../shared/network/types'
 import type { DataResolver, DataSet, PrepareOptions, SubnetworkResolver, SweepSettings } from '../shared/solver/index'
 import { TOUCHSTONE_LIMITS } from '../shared/touchstone/limits'
 import { portsFromFileName, readTouchstone } from '../shared/touchstone/read'
+
+/**
+ * A reader that stops early (`… | head`) closes the pipe: the command then ends
+ * quietly with status 0, as it has nothing more to say to anyone, instead of
+ * dying on an unhandled EPIPE with a stack trace.
+ */
+export function endQuietlyWhenOutputCloses(): void {
+  process.stdout.on('error', (error: NodeJS.ErrnoException) => {
+    if (error.code === 'EPIPE') process.exit(0)
+    throw error
+  })
+}
 
 /** Prints one line per problem on standard error and exits with status 2; nothing goes to standard output. */
 export function fail(problems: Array<Problem | string>): never {

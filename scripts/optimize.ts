@@ -7,7 +7,7 @@
 import { parseArgs } from 'node:util'
 import type { NetworkDocument } from '../shared/network/types'
 import { applyValues, optimizeTunables, prepareTuning, resolveTunables } from '../shared/tuning/index'
-import { cliPrepareOptions, fail, readDocument } from './network-cli'
+import { cliPrepareOptions, endQuietlyWhenOutputCloses, fail, readDocument } from './network-cli'
 import { wholeNumberOption } from './option-values'
 
 const USAGE = 'usage: npm run -s optimize -- FILE.json [--seed S] [--max-evaluations N]'
@@ -38,4 +38,5 @@ function main(): void {
   process.stderr.write(`${JSON.stringify({ met: result.met, evaluations: result.evaluations })}\n`)
 }
 
+endQuietlyWhenOutputCloses()
 main()

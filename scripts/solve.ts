@@ -7,7 +7,7 @@ import { parseArgs } from 'node:util'
 import { prepareNetwork, resolveSweep, solveNetwork, sweepFrequencies } from '../shared/solver/index'
 import { solveResultJsonText } from '../shared/solver/solve-json'
 import { writeTouchstone } from '../shared/touchstone/write'
-import { cliPrepareOptions, fail, readDocument, sweepOverride } from './network-cli'
+import { cliPrepareOptions, endQuietlyWhenOutputCloses, fail, readDocument, sweepOverride } from './network-cli'
 
 function main(): void {
   let parsed
@@ -40,4 +40,5 @@ function main(): void {
   process.stdout.write(output)
 }
 
+endQuietlyWhenOutputCloses()
 main()

@@ -6,7 +6,7 @@
  */
 import { parseArgs } from 'node:util'
 import { prepareTuning, resolveTolerances, runTrials } from '../shared/tuning/index'
-import { cliPrepareOptions, fail, readDocument } from './network-cli'
+import { cliPrepareOptions, endQuietlyWhenOutputCloses, fail, readDocument } from './network-cli'
 import { wholeNumberOption } from './option-values'
 
 const USAGE = 'usage: npm run -s tolerance -- FILE.json --trials N --seed S'
@@ -34,4 +34,5 @@ function main(): void {
   process.stdout.write(`${JSON.stringify({ trials, passed: run.passed, yield: run.passed / trials!, seed })}\n`)
 }
 
+endQuietlyWhenOutputCloses()
 main()

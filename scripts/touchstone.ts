@@ -10,7 +10,7 @@ import { TouchstoneError } from '../shared/touchstone/error'
 import { TOUCHSTONE_LIMITS } from '../shared/touchstone/limits'
 import { portsFromFileName, readTouchstone } from '../shared/touchstone/read'
 import { solveResultJsonText } from '../shared/solver/solve-json'
-import { fail } from './network-cli'
+import { endQuietlyWhenOutputCloses, fail } from './network-cli'
 
 function main(): void {
   const args = process.argv.slice(2)
@@ -33,4 +33,5 @@ function main(): void {
   }
 }
 
+endQuietlyWhenOutputCloses()
 main()

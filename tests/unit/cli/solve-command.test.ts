@@ -117,6 +117,19 @@ describe('solve command', { timeout: 240_000 }, () => {
     expect(results[5]!.stderr).toMatch(/cannot be solved at 2\.45 GHz/)
   })
 
+  it('ends quietly with status 0, nothing on standard error, when its reader stops early (… | head)', async () => {
+    const child = spawn(process.execPath, ['--import', 'tsx', join(root, 'scripts', 'solve.ts'), join(root, 'shared/examples/butler-matrix-4x4.json'), '--points', '10001'], { cwd: root })
+    let stderr = ''
+    child.stderr.on('data', (chunk) => { stderr += chunk })
+    // Read the first chunk only, then close our end of the pipe while the command is still writing.
+    const first = await new Promise<string>(resolve => child.stdout.once('data', chunk => resolve(String(chunk))))
+    child.stdout.destroy()
+    const status = await new Promise<number | null>(resolve => child.on('close', code => resolve(code)))
+    expect(first).toMatch(/^! Portwright solve/)
+    expect(stderr).toBe('')
+    expect(status).toBe(0)
+  })
+
   it('resolves subnetworks relative to the document that names them', () => {
     mkdirSync(join(folder, 'parts'), { recursive: true })
     write('parts/inner.json', {
