@@ -6,7 +6,8 @@
  * while on loopback. Reports the latency from an edit at one client to its
  * arrival at each of the others (p50, p95, p99, max), each instance's resident
  * memory, errors (closed connections, missing deliveries, server warnings),
- * the load generator's own CPU use and the rows the database wrote.
+ * each load-generator process's CPU use and event-loop delay, the rows the
+ * database wrote, and the updates that arrived late, by how many receivers.
  *
  *   PORTWRIGHT_BUILD_NAME=live npx tsx scripts/bench-coediting.ts [--clients 50] [--rate 20] [--seconds 60] [--instances 1] [--writers N] [--light] [--processes 1] [--profile]
  *
@@ -71,29 +72,31 @@ interface Generator {
   exited: Promise<void>
 }
 
+function deferred<T>() {
+  let resolve!: (value: T) => void
+  let reject!: (error: Error) => void
+  const promise = new Promise<T>((yes, no) => { resolve = yes; reject = no })
+  return { promise, resolve, reject }
+}
+
 /** Forks one load-generator process (scripts/lib/coediting-clients.ts) and hands it its clients. */
 function startGenerator(plan: ClientsPlan): Generator {
   const child = fork(resolve(import.meta.dirname, 'lib', 'coediting-clients.ts'), [], { execArgv: ['--import', 'tsx'], cwd: root })
   const exited = new Promise<void>(done => child.once('exit', () => done()))
-  let onReady: () => void = () => {}
-  let onResult: (r: ClientsResult) => void = () => {}
-  let onFailure: (e: Error) => void = () => {}
-  const ready = new Promise<void>((done, fail) => { onReady = done; onFailure = fail })
-  const result = new Promise<ClientsResult>((done, fail) => {
-    onResult = done
-    const failBoth = onFailure
-    onFailure = (error) => { failBoth(error); fail(error) }
-  })
-  // A failure before the result is asked for must not go unhandled.
-  result.catch(() => {})
+  const ready = deferred<void>()
+  const result = deferred<ClientsResult>()
+  // Either may fail before anyone awaits it; once settled, a later failure changes nothing.
+  ready.promise.catch(() => {})
+  result.promise.catch(() => {})
+  const fail = (error: Error) => { ready.reject(error); result.reject(error) }
   child.on('message', (message: FromClients) => {
-    if (message.type === 'ready') onReady()
-    else if (message.type === 'result') onResult(message.result)
-    else onFailure(new Error(`load generator failed: ${message.message}`))
+    if (message.type === 'ready') ready.resolve()
+    else if (message.type === 'result') result.resolve(message.result)
+    else fail(new Error(`load generator failed: ${message.message}`))
   })
-  child.once('exit', code => onFailure(new Error(`load generator exited (${code}) before its result`)))
+  child.once('exit', code => fail(new Error(`load generator exited (${code}) before its result`)))
   child.send({ type: 'plan', plan } satisfies ToClients)
-  return { process: child, ready, result, exited }
+  return { process: child, ready: ready.promise, result: result.promise, exited }
 }
 
 /** A delivery slower than this is listed by update in the report. */

@@ -9,9 +9,8 @@ import { monitorEventLoopDelay } from 'node:perf_hooks'
 import * as Y from 'yjs'
 import { WebsocketProvider } from 'y-websocket'
 import WebSocket from 'ws'
-import * as encoding from 'lib0/encoding'
 import { readNetwork, writeNetwork } from '../../shared/live/network-ydoc'
-import { webSocketWithHeaders } from '../../tests/support/live'
+import { presenceMessage, webSocketWithHeaders } from '../../tests/support/live'
 
 export interface ClientsPlan {
   cookie: string
@@ -77,16 +76,7 @@ async function run(plan: ClientsPlan): Promise<void> {
       const clientId = 1_000_000 + i
       let clock = 0
       const presence = () => {
-        if (socket.readyState !== WebSocket.OPEN) return
-        const update = encoding.createEncoder()
-        encoding.writeVarUint(update, 1)
-        encoding.writeVarUint(update, clientId)
-        encoding.writeVarUint(update, ++clock)
-        encoding.writeVarString(update, '{}')
-        const message = encoding.createEncoder()
-        encoding.writeVarUint(message, 1) // awareness
-        encoding.writeVarUint8Array(message, encoding.toUint8Array(update))
-        socket.send(encoding.toUint8Array(message))
+        if (socket.readyState === WebSocket.OPEN) socket.send(presenceMessage(clientId, ++clock, {}))
       }
       socket.on('open', presence)
       timers.push(setInterval(presence, 15_000))

@@ -15,7 +15,7 @@ import type { NetworkDocument } from '../../shared/network/types'
 import { startServer, stopProcess } from '../../scripts/lib/server-process'
 import { appUrl } from '../support/app'
 import { newSignedInUser, type ApiClient } from '../support/http'
-import { liveClient, liveServerUrl, synced, until, upgradeStatus, type LiveClient } from '../support/live'
+import { liveClient, liveServerUrl, presenceMessage, synced, until, upgradeStatus, type LiveClient } from '../support/live'
 
 const root = resolve(import.meta.dirname, '..', '..')
 const basePort = Number(process.env.PORTWRIGHT_TEST_PORT ?? 3939)
@@ -291,20 +291,9 @@ describe('live co-editing', () => {
       }
       received.push(entries)
     })
-    const presence = (clientId: number, clock: number, state: unknown) => {
-      const update = encoding.createEncoder()
-      encoding.writeVarUint(update, 1)
-      encoding.writeVarUint(update, clientId)
-      encoding.writeVarUint(update, clock)
-      encoding.writeVarString(update, JSON.stringify(state))
-      const message = encoding.createEncoder()
-      encoding.writeVarUint(message, 1)
-      encoding.writeVarUint8Array(message, encoding.toUint8Array(update))
-      return encoding.toUint8Array(message)
-    }
     const senders = await Promise.all(Array.from({ length: 30 }, () => open(team.editor.cookie)))
     // Everyone renews at once, as clients that joined together do; each claims to be someone else.
-    senders.forEach((socket, k) => socket.send(presence(5000 + k, 1, { selection: [`B${k}`], user: { name: 'Somebody Else', role: 'owner' } })))
+    senders.forEach((socket, k) => socket.send(presenceMessage(5000 + k, 1, { selection: [`B${k}`], user: { name: 'Somebody Else', role: 'owner' } })))
     const latest = () => new Map(received.flat().map(([id, clock, state]) => [id, { clock, state }]))
     await until('30 presences at the observer', () => [...latest().keys()].filter(id => id >= 5000 && id < 5030).length === 30)
     // Sent one message per change before; a batch carries many (the window is 50 ms: a few batches, more only on a slow machine).
@@ -315,8 +304,8 @@ describe('live co-editing', () => {
       expect(state?.user).toMatchObject({ name: 'Live Editor', role: 'editor' })
     }
     // Client 5000 belongs to the first connection: a second connection's state for it never arrives.
-    senders[1]!.send(presence(5000, 2, { selection: ['TAKEN'] }))
-    senders[0]!.send(presence(5000, 3, { selection: ['MINE'] }))
+    senders[1]!.send(presenceMessage(5000, 2, { selection: ['TAKEN'] }))
+    senders[0]!.send(presenceMessage(5000, 3, { selection: ['MINE'] }))
     await until('the owner\'s renewal', () => latest().get(5000)?.clock === 3)
     expect(received.flat().some(([, , state]) => JSON.stringify(state).includes('TAKEN'))).toBe(false)
     // Leaving removes the states, in batches too.

@@ -6,6 +6,7 @@
 import WebSocket from 'ws'
 import * as Y from 'yjs'
 import { WebsocketProvider } from 'y-websocket'
+import * as encoding from 'lib0/encoding'
 import type { NetworkDocument } from '../../shared/network/types'
 import { readNetwork, writeNetwork } from '../../shared/live/network-ydoc'
 
@@ -18,6 +19,19 @@ export interface LiveClient {
   /** One edit as the editor makes it: read, change, write back in one transaction. */
   edit: (change: (d: NetworkDocument) => void) => void
   destroy: () => void
+}
+
+/** One awareness (presence) message of the y-websocket protocol, as a client sends it: one state for one client id. */
+export function presenceMessage(clientId: number, clock: number, state: unknown): Uint8Array {
+  const update = encoding.createEncoder()
+  encoding.writeVarUint(update, 1)
+  encoding.writeVarUint(update, clientId)
+  encoding.writeVarUint(update, clock)
+  encoding.writeVarString(update, JSON.stringify(state))
+  const message = encoding.createEncoder()
+  encoding.writeVarUint(message, 1) // awareness
+  encoding.writeVarUint8Array(message, encoding.toUint8Array(update))
+  return encoding.toUint8Array(message)
 }
 
 /** A `ws` WebSocket class that sends fixed headers (cookie, origin) with the upgrade. */
