@@ -93,7 +93,11 @@ beforeAll(async () => {
 }, 120_000)
 
 afterAll(async () => {
-  for (const w of workers) killGroup(w, 'SIGTERM')
+  for (const w of workers) {
+    // A worker left paused by a failed test would not act on SIGTERM.
+    killGroup(w, 'SIGCONT')
+    killGroup(w, 'SIGTERM')
+  }
   await db?.end()
 })
 
@@ -102,21 +106,26 @@ describe('the job queue', () => {
     const trials = 6000
     const seed = 7
     const expected = cliYield(trials, seed)
+    // The other worker of this file waits, paused, until the victim is killed: left running, it could take
+    // every chunk after the victim's first one, and the victim would never be in the middle of a second.
+    const [victim, other] = workers
+    killGroup(other!, 'SIGSTOP')
     const sent = await owner.client.post(`${base}/networks/${networkId}/jobs`, { kind: 'tolerance', trials, seed })
     expect(sent.status, JSON.stringify(sent.body)).toBe(201)
     expect(sent.body).toMatchObject({ state: 'queued', progressDone: 0, progressTotal: trials })
     const jobId = sent.body.id as string
-    const [victim] = workers
-    // The victim has finished one chunk and is in the middle of another when it is killed.
+    // The victim has finished one chunk of this run and is in the middle of another when it is killed.
     const counts = () => {
       const out = victim!.output()
-      return { started: (out.match(/chunk \d+\/6: started/g) ?? []).length, finished: (out.match(/chunk \d+\/6: \d+ trials/g) ?? []).length }
+      const ofThisRun = (pattern: string) => (out.match(new RegExp(`job ${jobId} chunk \\d+/6: ${pattern}`, 'g')) ?? []).length
+      return { started: ofThisRun('started'), finished: ofThisRun('\\d+ trials') }
     }
     await until(() => {
       const { started, finished } = counts()
       return finished >= 1 && started > finished
     }, 120_000, () => `the first worker never was in the middle of a second chunk:\n${victim!.output()}`, 20)
     killGroup(victim!, 'SIGKILL')
+    killGroup(other!, 'SIGCONT')
     const seen: number[] = []
     await until(async () => {
       const now = await job(networkId, jobId)
